@@ -1,0 +1,107 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+
+import ConnectSessionSequelize from 'connect-session-sequelize';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import type { Sequelize } from 'sequelize';
+
+import { auditRoutes } from './components/audit/routes.js';
+import { authRoutes } from './components/auth/routes.js';
+import { healthRoutes } from './components/health/routes.js';
+import { userRoutes } from './components/users/routes.js';
+import type { Config } from './config.js';
+import { csrfGuard, loadUser } from './lib/auth-middleware.js';
+import { errorMiddleware, notFoundApi } from './lib/error-middleware.js';
+import './lib/request-context.js';
+
+export const SESSION_COOKIE = 'polecourt.sid';
+
+export interface BuiltApp {
+  app: Express;
+  close(): void;
+}
+
+/** Builds the Express app; server.ts puts it on a port. */
+export function buildApp(config: Config, sequelize: Sequelize): BuiltApp {
+  const app = express();
+  app.disable('x-powered-by');
+  if (config.TRUST_PROXY) app.set('trust proxy', 1);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          'default-src': ["'self'"],
+          'script-src': ["'self'"],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'", 'data:'],
+          'connect-src': ["'self'"],
+          'object-src': ["'none'"],
+          'frame-ancestors': ["'none'"],
+          'upgrade-insecure-requests': config.COOKIE_SECURE ? [] : null,
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+
+  // Health answers without touching the session store, so it can say "down".
+  app.use('/api/health', healthRoutes(sequelize));
+
+  const SequelizeStore = ConnectSessionSequelize(session.Store);
+  const store = new SequelizeStore({
+    db: sequelize,
+    tableName: 'sessions',
+    checkExpirationInterval: 15 * 60 * 1000,
+    expiration: config.SESSION_MAX_AGE_HOURS * 3600 * 1000,
+  });
+
+  app.use(
+    '/api',
+    express.json({ limit: '1mb' }),
+    session({
+      name: SESSION_COOKIE,
+      secret: config.SESSION_SECRET,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      proxy: config.TRUST_PROXY,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        secure: config.COOKIE_SECURE,
+        maxAge: config.SESSION_MAX_AGE_HOURS * 3600 * 1000,
+        path: '/',
+      },
+    }),
+    loadUser,
+    csrfGuard,
+  );
+
+  app.use('/api/auth', authRoutes(SESSION_COOKIE));
+  app.use('/api/users', userRoutes());
+  app.use('/api/audit-events', auditRoutes());
+  app.all('/api/{*rest}', notFoundApi);
+
+  const webDist = config.WEB_DIST ?? path.resolve(import.meta.dirname, '../../web/dist');
+  if (existsSync(path.join(webDist, 'index.html'))) {
+    app.use(express.static(webDist, { index: false, maxAge: '1h' }));
+    // Client-side routes all load the one page.
+    app.get('/{*rest}', (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(path.join(webDist, 'index.html'));
+    });
+  }
+
+  app.use(errorMiddleware);
+
+  return {
+    app,
+    close: () => store.stopExpiringSessions(),
+  };
+}

@@ -1,0 +1,13 @@
+import type { Transaction } from 'sequelize';
+
+import type { SessionUser } from '../../lib/request-context.js';
+import { auditRepository, type AuditEventInput } from './repository.js';
+
+/** What every use case calls after a write, inside the same transaction. */
+export function recordAudit(
+  transaction: Transaction,
+  actor: SessionUser | null,
+  event: Omit<AuditEventInput, 'actor'>,
+): Promise<unknown> {
+  return auditRepository.append({ ...event, actor: actor ? { id: actor.id, email: actor.email } : null }, transaction);
+}

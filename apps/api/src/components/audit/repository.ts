@@ -1,0 +1,153 @@
+import { Op, type Transaction, type WhereOptions } from 'sequelize';
+
+import { canonicalJson } from '../../lib/canonical-json.js';
+import { chainHash } from './chain-hash.js';
+import { AuditEventModel, AuditHeadModel } from './model.js';
+
+export interface AuditEventInput {
+  actor: { id: number; email: string } | null;
+  action: string;
+  entityType: string;
+  entityId?: string | number | null;
+  productLineId?: number | null;
+  before?: unknown;
+  after?: unknown;
+}
+
+export interface AuditEventRecord {
+  id: number;
+  occurredAt: string;
+  actorId: number | null;
+  actorEmail: string | null;
+  action: string;
+  entityType: string;
+  entityId: string | null;
+  productLineId: number | null;
+  before: unknown;
+  after: unknown;
+  prevHash: string;
+  hash: string;
+}
+
+export interface AuditFilter {
+  productLineId?: number | undefined;
+  actorId?: number | undefined;
+  action?: string | undefined;
+  entityType?: string | undefined;
+  entityId?: string | undefined;
+  from?: Date | undefined;
+  to?: Date | undefined;
+}
+
+function toRecord(row: AuditEventModel): AuditEventRecord {
+  const e = row.get({ plain: true });
+  return {
+    id: Number(e.id),
+    occurredAt: new Date(e.occurredAt).toISOString(),
+    actorId: e.actorId,
+    actorEmail: e.actorEmail,
+    action: e.action,
+    entityType: e.entityType,
+    entityId: e.entityId,
+    productLineId: e.productLineId,
+    before: e.beforeJson === null ? null : JSON.parse(e.beforeJson),
+    after: e.afterJson === null ? null : JSON.parse(e.afterJson),
+    prevHash: e.prevHash,
+    hash: e.hash,
+  };
+}
+
+function whereOf(f: AuditFilter): WhereOptions {
+  const where: Record<string | symbol, unknown> = {};
+  if (f.productLineId !== undefined) where.productLineId = f.productLineId;
+  if (f.actorId !== undefined) where.actorId = f.actorId;
+  if (f.action !== undefined) where.action = f.action;
+  if (f.entityType !== undefined) where.entityType = f.entityType;
+  if (f.entityId !== undefined) where.entityId = f.entityId;
+  if (f.from || f.to) {
+    where.occurredAt = { ...(f.from ? { [Op.gte]: f.from } : {}), ...(f.to ? { [Op.lte]: f.to } : {}) };
+  }
+  return where as WhereOptions;
+}
+
+export const auditRepository = {
+  /**
+   * Appends one event to the chain inside the caller's transaction, so the
+   * event lands if and only if the write it describes lands. The head row is
+   * locked FOR UPDATE: concurrent writers are put in line, never forked.
+   */
+  async append(input: AuditEventInput, transaction: Transaction): Promise<AuditEventRecord> {
+    const head = await AuditHeadModel.findByPk(1, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!head) throw new Error('audit_head row is missing; run the migrations');
+    const occurredAt = new Date();
+    const fields = {
+      occurredAt: occurredAt.toISOString(),
+      actorId: input.actor?.id ?? null,
+      actorEmail: input.actor?.email ?? null,
+      action: input.action,
+      entityType: input.entityType,
+      entityId: input.entityId === undefined || input.entityId === null ? null : String(input.entityId),
+      productLineId: input.productLineId ?? null,
+      beforeJson: input.before === undefined || input.before === null ? null : canonicalJson(input.before),
+      afterJson: input.after === undefined || input.after === null ? null : canonicalJson(input.after),
+    };
+    const prevHash = head.lastHash;
+    const hash = chainHash(prevHash, fields);
+    const row = await AuditEventModel.create({ ...fields, occurredAt, prevHash, hash }, { transaction });
+    await AuditHeadModel.update({ lastId: row.id, lastHash: hash }, { where: { id: 1 }, transaction });
+    return toRecord(row);
+  },
+
+  async list(filter: AuditFilter, limit: number, offset: number): Promise<{ items: AuditEventRecord[]; total: number }> {
+    const { rows, count } = await AuditEventModel.findAndCountAll({
+      where: whereOf(filter),
+      order: [['id', 'DESC']],
+      limit,
+      offset,
+    });
+    return { items: rows.map(toRecord), total: count };
+  },
+
+  async head(): Promise<{ lastId: number | null; lastHash: string }> {
+    const head = await AuditHeadModel.findByPk(1, { raw: true });
+    return { lastId: head?.lastId === null || head?.lastId === undefined ? null : Number(head.lastId), lastHash: head?.lastHash ?? '' };
+  },
+
+  /** Walks the chain in id order in pages; reports the first event whose link or hash does not match. */
+  async verify(): Promise<{ intact: boolean; checked: number; firstBreak: { id: number; reason: string } | null }> {
+    let prev = '0'.repeat(64);
+    let checked = 0;
+    let lastId = 0;
+    for (;;) {
+      const rows = await AuditEventModel.findAll({ where: { id: { [Op.gt]: lastId } }, order: [['id', 'ASC']], limit: 1000, raw: true });
+      if (rows.length === 0) break;
+      for (const e of rows) {
+        checked += 1;
+        const fields = {
+          occurredAt: new Date(e.occurredAt).toISOString(),
+          actorId: e.actorId,
+          actorEmail: e.actorEmail,
+          action: e.action,
+          entityType: e.entityType,
+          entityId: e.entityId,
+          productLineId: e.productLineId,
+          beforeJson: e.beforeJson,
+          afterJson: e.afterJson,
+        };
+        if (e.prevHash !== prev) {
+          return { intact: false, checked, firstBreak: { id: Number(e.id), reason: 'its link to the event before it does not match' } };
+        }
+        if (chainHash(prev, fields) !== e.hash) {
+          return { intact: false, checked, firstBreak: { id: Number(e.id), reason: 'its content does not match its hash' } };
+        }
+        prev = e.hash;
+        lastId = Number(e.id);
+      }
+    }
+    const head = await this.head();
+    if (head.lastHash !== prev) {
+      return { intact: false, checked, firstBreak: { id: lastId, reason: 'the chain head does not match the last event' } };
+    }
+    return { intact: true, checked, firstBreak: null };
+  },
+};

@@ -1,0 +1,64 @@
+import { timingSafeEqual } from 'node:crypto';
+
+import type { NextFunction, Request, Response } from 'express';
+
+import type { Role } from '@polecourt/contracts';
+
+import { userRepository } from '../components/users/repository.js';
+import { AppError } from './app-error.js';
+import type { SessionUser } from './request-context.js';
+
+/**
+ * Loads the signed-in user on every request from the database, so a
+ * deactivated account or a changed role takes effect at once.
+ */
+export async function loadUser(req: Request, _res: Response, next: NextFunction): Promise<void> {
+  const userId = req.session?.userId;
+  if (userId !== undefined) {
+    const user = await userRepository.findById(userId);
+    if (user && user.active) {
+      req.user = { id: user.id, email: user.email, name: user.name, role: user.role };
+    } else {
+      delete req.session.userId;
+    }
+  }
+  next();
+}
+
+export function requireAuth(req: Request, _res: Response, next: NextFunction): void {
+  if (!req.user) throw AppError.unauthorized();
+  next();
+}
+
+/** The one role gate: a route lists the roles that may use it. */
+export function requireRole(...roles: Role[]) {
+  return (req: Request, _res: Response, next: NextFunction): void => {
+    if (!req.user) throw AppError.unauthorized();
+    if (!roles.includes(req.user.role)) {
+      throw AppError.forbidden(`This needs one of these roles: ${roles.join(', ')}.`);
+    }
+    next();
+  };
+}
+
+export function currentUser(req: Request): SessionUser {
+  if (!req.user) throw AppError.unauthorized();
+  return req.user;
+}
+
+const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+const CSRF_EXEMPT = new Set(['/api/auth/login']);
+
+/** Every state-changing request of a signed-in session must echo its CSRF token. */
+export function csrfGuard(req: Request, _res: Response, next: NextFunction): void {
+  if (SAFE_METHODS.has(req.method) || CSRF_EXEMPT.has(req.path)) return next();
+  const expected = req.session?.csrfToken;
+  if (!expected) return next(); // not signed in: the route's own auth check answers 401
+  const sent = req.get('x-csrf-token') ?? '';
+  const a = Buffer.from(sent);
+  const b = Buffer.from(expected);
+  if (a.length !== b.length || !timingSafeEqual(a, b)) {
+    throw new AppError('csrf_token_invalid', 'The request is missing its x-csrf-token header (or it is stale). Reload the page and try again.', 403);
+  }
+  next();
+}

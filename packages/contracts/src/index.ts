@@ -1,0 +1,3 @@
+export * from './roles.js';
+export * from './auth.js';
+export * from './api-error.js';
