@@ -1,0 +1,18 @@
+import { start, stop, type Running } from '../../src/server.js';
+
+/** Starts the API in-process on an ephemeral port against the test database. */
+export async function startTestServer(): Promise<Running> {
+  if (!process.env.DB_PASSWORD) {
+    throw new Error('The API tests need the test database: run them through `npm test` (or `npm test -- api`).');
+  }
+  return start({ PORT: '0', LOG_LEVEL: 'silent', NODE_ENV: 'test' });
+}
+
+export { stop as stopTestServer };
+
+let counter = 0;
+/** A unique e-mail per call so tests never collide on the shared database. */
+export function uniqueEmail(prefix = 'person'): string {
+  counter += 1;
+  return `${prefix}.${Date.now().toString(36)}.${counter}@test.example.com`;
+}
