@@ -47,7 +47,7 @@ async function main() {
     step('migrating and seeding the test database');
     run(tsxBin(root), ['src/db/migrate-cli.ts', 'up'], { cwd: api, env });
     run(tsxBin(root), ['src/db/migrate-cli.ts', 'seed'], { cwd: api, env });
-    buildAll(root);
+    if (!process.env.POLECOURT_SKIP_BUILD) buildAll(root);
 
     rmSync(resultsDir, { recursive: true, force: true });
     mkdirSync(resultsDir, { recursive: true });
