@@ -83,6 +83,8 @@ export type CheckStatus = 'pass' | 'fail' | 'n/a';
 export interface Check {
   requirement: keyof Requirements;
   limit: number;
+  /** The limit tightened by the requirement set's marginPct: what the status compares with. */
+  effectiveLimit?: number;
   value: number | null;
   estimate: number | null;
   status: CheckStatus;

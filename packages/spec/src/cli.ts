@@ -1,0 +1,224 @@
+#!/usr/bin/env node
+// polecourt: the engine on the command line. JSON only on stdout; messages on
+// stderr. Usage text goes to stdout only when asked for with --help (that is
+// the output the caller wanted); a usage mistake prints an error object on
+// stdout, the message on stderr, and exits 2.
+import { openSync, readFileSync, createReadStream } from 'node:fs';
+import { StringDecoder } from 'node:string_decoder';
+import { assessModel } from './assess-model.js';
+import { evaluate } from './evaluate.js';
+import { parseDesign } from './parse-design.js';
+import { parseRequirements, type ResolvedRequirements } from './parse-requirements.js';
+import { regionBounds } from './region-bounds.js';
+import { SpecInputError } from './spec-input-error.js';
+import { ENGINE_VERSION } from './version.js';
+
+const USAGE = `polecourt ${ENGINE_VERSION}: transient-response requirements and closed-loop assessments
+
+Usage:
+  polecourt region   --requirements FILE
+  polecourt evaluate --design FILE [--requirements FILE]
+  polecourt batch    --designs FILE.jsonl [--requirements FILE]
+  polecourt --help | --version
+
+FILE may be - for standard input (for one of the files only). Output is JSON
+on standard output: region prints the admissible region's bounds, evaluate one
+assessment, batch one assessment (or one {"error": ...} object) per input
+line, in order. Messages go to standard error; this text goes to standard
+output only when asked for with --help.
+
+Exit status:
+  0  evaluate: compliant, or no requirements given; batch: every line
+     compliant (or no requirements and no bad line); region: bounds printed
+  1  evaluate: noncompliant; batch: at least one line noncompliant or bad
+  2  bad input or usage: {"error": {"code", "message", "path"}} on stdout
+  3  an internal error of the engine (please report it)
+`;
+
+class UsageError extends Error {
+  constructor(
+    readonly code: string,
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
+const COMMAND_FLAGS: Record<string, { required: string[]; optional: string[] }> = {
+  region: { required: ['requirements'], optional: [] },
+  evaluate: { required: ['design'], optional: ['requirements'] },
+  batch: { required: ['designs'], optional: ['requirements'] },
+};
+
+function parseArgs(argv: string[]): { command: string; flags: Map<string, string> } | 'help' | 'version' {
+  if (argv.includes('--help') || argv.includes('-h') || argv[0] === 'help') return 'help';
+  if (argv[0] === '--version') return 'version';
+  const command = argv[0];
+  if (command === undefined) throw new UsageError('missing_command', 'Give a command: region, evaluate or batch (see polecourt --help).');
+  const spec = COMMAND_FLAGS[command];
+  if (spec === undefined) throw new UsageError('unknown_command', `Unknown command "${command}"; the commands are region, evaluate and batch.`);
+  const flags = new Map<string, string>();
+  for (let i = 1; i < argv.length; i++) {
+    const arg = argv[i] as string;
+    if (!arg.startsWith('--')) throw new UsageError('unexpected_argument', `Unexpected argument "${arg}"; every file is given with a flag.`);
+    const eq = arg.indexOf('=');
+    const name = eq >= 0 ? arg.slice(2, eq) : arg.slice(2);
+    if (![...spec.required, ...spec.optional].includes(name)) {
+      throw new UsageError('unknown_flag', `Unknown flag --${name} for ${command}; it takes ${[...spec.required, ...spec.optional].map((f) => `--${f}`).join(', ')}.`);
+    }
+    let value: string | undefined;
+    if (eq >= 0) value = arg.slice(eq + 1);
+    else {
+      value = argv[i + 1];
+      i++;
+    }
+    if (value === undefined || value === '' || (value.startsWith('--') && value !== '-')) {
+      throw new UsageError('missing_value', `--${name} needs a file name (or - for standard input).`);
+    }
+    if (flags.has(name)) throw new UsageError('duplicate_flag', `--${name} is given twice.`);
+    flags.set(name, value);
+  }
+  for (const name of spec.required) {
+    if (!flags.has(name)) throw new UsageError('missing_flag', `${command} needs --${name} FILE.`);
+  }
+  if ([...flags.values()].filter((v) => v === '-').length > 1) {
+    throw new UsageError('stdin_twice', 'Only one file can come from standard input (-).');
+  }
+  return { command, flags };
+}
+
+function readText(file: string, what: string): string {
+  try {
+    return readFileSync(file === '-' ? 0 : file, 'utf8').replace(/^\uFEFF/, '');
+  } catch (e) {
+    throw new UsageError('file_unreadable', `Cannot read the ${what} file ${file}: ${(e as Error).message}`);
+  }
+}
+
+function readJson(file: string, what: string): unknown {
+  const text = readText(file, what);
+  try {
+    return JSON.parse(text);
+  } catch (e) {
+    throw new UsageError('invalid_json', `The ${what} file ${file} is not valid JSON: ${(e as Error).message}`);
+  }
+}
+
+function errorObject(e: unknown): { code: string; message: string; path?: string } {
+  if (e instanceof SpecInputError) return { code: e.code, message: e.message, path: e.path };
+  if (e instanceof UsageError) return { code: e.code, message: e.message };
+  return { code: 'internal_error', message: `Internal error: ${e instanceof Error ? e.message : String(e)}` };
+}
+
+function write(text: string): Promise<void> {
+  return new Promise((resolve) => {
+    if (process.stdout.write(text)) resolve();
+    else process.stdout.once('drain', () => resolve());
+  });
+}
+
+// Streams the designs chunk by chunk (not line by line through readline, whose
+// per-line promises cost more than the assessments): every complete line of a
+// chunk is assessed, and the chunk's output is written before the next read,
+// so memory stays bounded and output order follows input order.
+async function runBatch(file: string, req: ResolvedRequirements | null): Promise<number> {
+  let stream: NodeJS.ReadableStream;
+  if (file === '-') stream = process.stdin;
+  else {
+    let fd: number;
+    try {
+      fd = openSync(file, 'r');
+    } catch (e) {
+      throw new UsageError('file_unreadable', `Cannot read the designs file ${file}: ${(e as Error).message}`);
+    }
+    stream = createReadStream('', { fd, highWaterMark: 1 << 20 });
+  }
+  const decoder = new StringDecoder('utf8');
+  let lineNo = 0;
+  let allGood = true;
+  let rest = '';
+  const assessLine = (raw: string): string => {
+    lineNo++;
+    let line = raw.endsWith('\r') ? raw.slice(0, -1) : raw;
+    if (lineNo === 1 && line.charCodeAt(0) === 0xfeff) line = line.slice(1);
+    try {
+      let design: unknown;
+      try {
+        design = JSON.parse(line);
+      } catch (e) {
+        throw new SpecInputError('invalid_json', `Line ${lineNo} is not valid JSON: ${(e as Error).message}`, '');
+      }
+      const a = assessModel(parseDesign(design), req);
+      if (a.verdict === 'noncompliant') allGood = false;
+      return JSON.stringify(a);
+    } catch (e) {
+      allGood = false;
+      const err = errorObject(e);
+      if (err.code === 'internal_error') process.stderr.write(`polecourt: line ${lineNo}: ${err.message}\n`);
+      return JSON.stringify({ error: { ...err, line: lineNo } });
+    }
+  };
+  const assessText = (text: string, final: boolean): string[] => {
+    const lines = (rest + text).split('\n');
+    rest = final ? '' : (lines.pop() as string);
+    if (final && lines[lines.length - 1] === '') lines.pop(); // the newline that ends the file
+    return lines.map(assessLine);
+  };
+  for await (const chunk of stream) {
+    const text = typeof chunk === 'string' ? chunk : decoder.write(chunk as Buffer);
+    const out = assessText(text, false);
+    if (out.length > 0) await write(out.join('\n') + '\n');
+  }
+  const out = assessText(decoder.end(), true);
+  if (out.length > 0) await write(out.join('\n') + '\n');
+  return allGood ? 0 : 1;
+}
+
+async function main(argv: string[]): Promise<number> {
+  let parsed: ReturnType<typeof parseArgs>;
+  try {
+    parsed = parseArgs(argv);
+    if (parsed === 'help') {
+      await write(USAGE);
+      return 0;
+    }
+    if (parsed === 'version') {
+      await write(JSON.stringify({ engineVersion: ENGINE_VERSION }) + '\n');
+      return 0;
+    }
+    const { command, flags } = parsed;
+    const reqFile = flags.get('requirements');
+    if (command === 'region') {
+      const req = parseRequirements(readJson(reqFile as string, 'requirements'));
+      await write(JSON.stringify(regionBounds(req), null, 2) + '\n');
+      return 0;
+    }
+    if (command === 'evaluate') {
+      const design = readJson(flags.get('design') as string, 'design');
+      const requirements = reqFile === undefined ? undefined : readJson(reqFile, 'requirements');
+      const a = evaluate(design, requirements);
+      await write(JSON.stringify(a, null, 2) + '\n');
+      return a.verdict === 'noncompliant' ? 1 : 0;
+    }
+    const req = reqFile === undefined ? null : parseRequirements(readJson(reqFile, 'requirements'));
+    return await runBatch(flags.get('designs') as string, req);
+  } catch (e) {
+    const err = errorObject(e);
+    await write(JSON.stringify({ error: err }) + '\n');
+    process.stderr.write(`polecourt: ${err.message}\n`);
+    if (e instanceof UsageError && e.code !== 'file_unreadable' && e.code !== 'invalid_json') {
+      process.stderr.write('Run polecourt --help for usage.\n');
+    }
+    return err.code === 'internal_error' ? 3 : 2;
+  }
+}
+
+main(process.argv.slice(2)).then(
+  (code) => {
+    process.exitCode = code;
+  },
+  (e: unknown) => {
+    process.stderr.write(`polecourt: ${e instanceof Error ? e.message : String(e)}\n`);
+    process.exitCode = 3;
+  },
+);

@@ -1,0 +1,90 @@
+// Packs a modal form into flat typed arrays for allocation-free evaluation of
+// the response and its first three time derivatives (see eval-response.ts).
+// Each term t^n e^{sigma t} (A_n cos wt + B_n sin wt) differentiates into the
+// same shape: A'_n = sigma A_n + w B_n + (n+1) A_{n+1},
+// B'_n = sigma B_n - w A_n + (n+1) B_{n+1}.
+import type { ModalForm } from './partial-fractions.js';
+
+export const PACKED_LEVELS = 4;
+
+export interface PackedResponse {
+  count: number;
+  sigma: Float64Array;
+  omega: Float64Array;
+  /** |p| = sqrt(sigma^2 + omega^2): the term's fastest time scale is 1/|p|. */
+  speed: Float64Array;
+  degree: Int32Array;
+  offset: Int32Array;
+  /** cos[level][offset + n], sin[level][offset + n], level 0 = value. */
+  cos: Float64Array[];
+  sin: Float64Array[];
+  /**
+   * The same coefficients interleaved for the hot loop: term k starts at
+   * 2 * PACKED_LEVELS * offset[k]; level l, power n sits at
+   * + 2 * (l * degree[k] + n) (cos) and + 1 (sin).
+   */
+  flat: Float64Array;
+  /** sqrt(A_n^2 + B_n^2) of the value: |term| <= e^{sigma t} sum bound_n t^n. */
+  bound: Float64Array;
+  /** 0 for the constant term of the pole at the origin, 1 for a transient. */
+  transient: Uint8Array;
+}
+
+export function packResponse(form: ModalForm, scale: number): PackedResponse {
+  const count = form.terms.length;
+  let size = 0;
+  for (const t of form.terms) size += t.multiplicity;
+  const p: PackedResponse = {
+    count,
+    sigma: new Float64Array(count),
+    omega: new Float64Array(count),
+    speed: new Float64Array(count),
+    degree: new Int32Array(count),
+    offset: new Int32Array(count),
+    cos: Array.from({ length: PACKED_LEVELS }, () => new Float64Array(size)),
+    sin: Array.from({ length: PACKED_LEVELS }, () => new Float64Array(size)),
+    bound: new Float64Array(size),
+    transient: new Uint8Array(count),
+    flat: new Float64Array(2 * PACKED_LEVELS * size),
+  };
+  let off = 0;
+  form.terms.forEach((t, k) => {
+    const m = t.multiplicity;
+    p.sigma[k] = t.sigma;
+    p.omega[k] = t.omega;
+    p.speed[k] = Math.hypot(t.sigma, t.omega);
+    p.degree[k] = m;
+    p.offset[k] = off;
+    p.transient[k] = t.sigma === 0 && t.omega === 0 ? 0 : 1;
+    const c0 = p.cos[0] as Float64Array;
+    const s0 = p.sin[0] as Float64Array;
+    for (let n = 0; n < m; n++) {
+      c0[off + n] = (t.cos[n] as number) * scale;
+      s0[off + n] = (t.sin[n] as number) * scale;
+      p.bound[off + n] = Math.hypot(c0[off + n] as number, s0[off + n] as number);
+    }
+    for (let level = 1; level < PACKED_LEVELS; level++) {
+      const pc = p.cos[level - 1] as Float64Array;
+      const ps = p.sin[level - 1] as Float64Array;
+      const nc = p.cos[level] as Float64Array;
+      const ns = p.sin[level] as Float64Array;
+      for (let n = 0; n < m; n++) {
+        const a = pc[off + n] as number;
+        const b = ps[off + n] as number;
+        const a1 = n + 1 < m ? (pc[off + n + 1] as number) : 0;
+        const b1 = n + 1 < m ? (ps[off + n + 1] as number) : 0;
+        nc[off + n] = t.sigma * a + t.omega * b + (n + 1) * a1;
+        ns[off + n] = t.sigma * b - t.omega * a + (n + 1) * b1;
+      }
+    }
+    const base = 2 * PACKED_LEVELS * off;
+    for (let level = 0; level < PACKED_LEVELS; level++) {
+      for (let n = 0; n < m; n++) {
+        p.flat[base + 2 * (level * m + n)] = (p.cos[level] as Float64Array)[off + n] as number;
+        p.flat[base + 2 * (level * m + n) + 1] = (p.sin[level] as Float64Array)[off + n] as number;
+      }
+    }
+    off += m;
+  });
+  return p;
+}

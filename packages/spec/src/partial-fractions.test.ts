@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import { partialFractions } from './partial-fractions.js';
+import { stepResponse } from './step-response.js';
+import { parseDesign } from './parse-design.js';
+import { assertClose } from '../test/asserts.js';
+import { pairOf, re } from '../test/design-builders.js';
+
+// Laplace transform pairs as tabulated in Nise ch. 2 (Table 2.1/2.2) and
+// Ogata Appendix A: 1/(s (s+a)^2) <-> (1 - e^{-at} - a t e^{-at}) / a^2,
+// 1/(s (s+a)^3) <-> (1 - e^{-at}(1 + a t + a^2 t^2 / 2)) / a^3.
+describe('partialFractions', () => {
+  it('double pole: 1/(s (s+a)^2) matches the transform table', () => {
+    const a = 3;
+    const y = stepResponse(parseDesign({ poles: [re(-a), re(-a)], gain: 1 }));
+    for (const t of [0, 0.1, 0.5, 1, 2, 5]) {
+      assertClose(y.value(t), (1 - Math.exp(-a * t) - a * t * Math.exp(-a * t)) / (a * a), 1e-13, 1e-3);
+    }
+  });
+
+  it('triple pole: 1/(s (s+a)^3) matches the transform table, exact coefficients', () => {
+    const a = 2;
+    const form = partialFractions(parseDesign({ poles: [re(-a), re(-a), re(-a)], gain: 1 }));
+    const pole = form.terms.find((t) => t.sigma === -a);
+    expect(pole?.multiplicity).toBe(3);
+    const c = pole?.cos ?? [];
+    assertClose(c[0], -1 / a ** 3, 1e-14);
+    assertClose(c[1], -1 / a ** 2, 1e-14);
+    assertClose(c[2], -1 / (2 * a), 1e-14);
+  });
+
+  it('numerically repeated poles from root finding are clustered (tolerance 1e-5 relative)', () => {
+    const close = parseDesign({ poles: [re(-1), re(-1 - 1e-8), re(-4)], gain: 4 });
+    const form = partialFractions(close);
+    expect(form.terms.find((t) => Math.abs(t.sigma + 1) < 1e-6)?.multiplicity).toBe(2);
+    // and the response matches the exact double-pole model to round-off
+    const exact = stepResponse(parseDesign({ poles: [re(-1), re(-1), re(-4)], gain: 4 }));
+    const near = stepResponse(close);
+    for (const t of [0.2, 1, 3]) assertClose(near.value(t), exact.value(t), 1e-7);
+  });
+
+  it('a near pole-zero cancellation gives a small residue, not a blow-up', () => {
+    const form = partialFractions(parseDesign({ poles: [re(-1), ...pairOf(-2, 3)], zeros: [re(-1 - 1e-7)], gain: 13 }));
+    const slow = form.terms.find((t) => t.sigma === -1);
+    expect(Math.abs(slow?.cos[0] ?? 1)).toBeLessThan(1e-6);
+  });
+
+  it('biproper: y(0+) = D, the feedthrough', () => {
+    const y = stepResponse(parseDesign({ numerator: [3, 1], denominator: [1, 2] }));
+    expect(y.initialValue).toBe(3);
+    assertClose(y.value(0), 3, 1e-14);
+    assertClose(y.finalValue, 0.5, 1e-15);
+    assertClose(y.value(40), 0.5, 1e-12);
+  });
+
+  it('conjugate pairs become real cos/sin terms: 1/(s((s+1)^2+4)) against the table', () => {
+    // Nise Table 2.2: e^{-at}(cos wt) and e^{-at} sin wt pairs
+    const y = stepResponse(parseDesign({ poles: pairOf(-1, 2), gain: 5 }));
+    for (const t of [0.3, 1.1, 2.5]) {
+      assertClose(y.value(t), 1 - Math.exp(-t) * (Math.cos(2 * t) + 0.5 * Math.sin(2 * t)), 1e-13);
+      assertClose(y.derivative(t), 2.5 * Math.exp(-t) * Math.sin(2 * t), 1e-12, 1e-3);
+    }
+  });
+});

@@ -1,0 +1,105 @@
+// Exact relations checked on random stable models (fast-check 4.11.0):
+// G(s/a) has the step response y(a t), so every time scales by 1/a and
+// overshoot/undershoot are unchanged; k G has the same relative metrics;
+// the zpk and polynomial forms of one model give the same metrics.
+// Overshoot and undershoot (in %) are compared to 1e-9..1e-6 of max(value, 1 %):
+// a 1e-5 % overshoot is a difference of two nearly equal numbers.
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { computeStepMetrics } from './step-metrics.js';
+import { parseDesign } from './parse-design.js';
+import type { Complex, StepMetrics } from './types.js';
+
+const pole = fc.double({ min: 0.2, max: 20, noNaN: true });
+const stableModel = fc
+  .record({
+    sigma: pole,
+    omega: fc.double({ min: 0.1, max: 20, noNaN: true }),
+    reals: fc.array(pole, { maxLength: 3 }),
+    zero: fc.option(fc.double({ min: -30, max: -0.3, noNaN: true }), { nil: undefined }),
+  })
+  .map(({ sigma, omega, reals, zero }) => {
+    const poles: Complex[] = [{ re: -sigma, im: omega }, { re: -sigma, im: -omega }, ...reals.map((r) => ({ re: -r, im: 0 }))];
+    const zeros: Complex[] = zero === undefined ? [] : [{ re: zero, im: 0 }];
+    return { poles, zeros, gain: 1 };
+  });
+
+function metrics(design: unknown): StepMetrics {
+  const m = computeStepMetrics(parseDesign(design), 2).metrics;
+  if (!m) throw new Error('expected metrics');
+  return m;
+}
+
+const close = (a: number | null, b: number | null, rel: number, abs = 1e-9) =>
+  a === null || b === null ? a === b : Math.abs(a - b) <= rel * Math.max(Math.abs(b), abs);
+
+describe('computeStepMetrics properties', () => {
+  it('time scaling s -> s/a: times scale by 1/a, overshoot and undershoot unchanged', () => {
+    fc.assert(
+      fc.property(stableModel, fc.double({ min: 0.01, max: 100, noNaN: true }), (design, a) => {
+        const scaled = {
+          poles: design.poles.map((p) => ({ re: a * p.re, im: a * p.im })),
+          zeros: design.zeros.map((z) => ({ re: a * z.re, im: a * z.im })),
+          gain: design.gain * a ** (design.poles.length - design.zeros.length),
+        };
+        const m0 = metrics(design);
+        const m1 = metrics(scaled);
+        return (
+          close(m1.overshootPct, m0.overshootPct, 1e-7, 1) &&
+          close(m1.undershootPct, m0.undershootPct, 1e-7, 1) &&
+          close(m1.peakTime === null ? null : m1.peakTime * a, m0.peakTime, 1e-7) &&
+          close(m1.settlingTime * a, m0.settlingTime, 1e-7) &&
+          close(m1.riseTime === null ? null : m1.riseTime * a, m0.riseTime, 1e-7) &&
+          close(m1.finalValue, m0.finalValue, 1e-9)
+        );
+      }),
+      { numRuns: 300 },
+    );
+ }, 60_000);
+
+  it('gain scaling (either sign) leaves every relative metric unchanged', () => {
+    fc.assert(
+      fc.property(stableModel, fc.double({ min: 0.001, max: 1000, noNaN: true }), fc.boolean(), (design, k, negative) => {
+        const m0 = metrics(design);
+        const m1 = metrics({ ...design, gain: design.gain * k * (negative ? -1 : 1) });
+        return (
+          close(m1.overshootPct, m0.overshootPct, 1e-9, 1) &&
+          close(m1.undershootPct, m0.undershootPct, 1e-9, 1) &&
+          close(m1.peakTime, m0.peakTime, 1e-9) &&
+          close(m1.settlingTime, m0.settlingTime, 1e-9) &&
+          close(m1.riseTime, m0.riseTime, 1e-9) &&
+          close(m1.finalValue, m0.finalValue * k * (negative ? -1 : 1), 1e-12)
+        );
+      }),
+      { numRuns: 300 },
+    );
+ }, 60_000);
+
+  it('the zpk and polynomial forms of one model give the same metrics', () => {
+    fc.assert(
+      fc.property(stableModel, (design) => {
+        const model = parseDesign(design);
+        const m0 = metrics(design);
+        const m1 = metrics({ numerator: model.numerator, denominator: model.denominator });
+        return (
+          close(m1.overshootPct, m0.overshootPct, 1e-6, 1) &&
+          close(m1.undershootPct, m0.undershootPct, 1e-6, 1) &&
+          close(m1.peakTime, m0.peakTime, 1e-6) &&
+          close(m1.settlingTime, m0.settlingTime, 1e-6) &&
+          close(m1.riseTime, m0.riseTime, 1e-6)
+        );
+      }),
+      { numRuns: 300 },
+    );
+ }, 60_000);
+
+  it('every stable model with a non-zero final value gets finite metrics', () => {
+    fc.assert(
+      fc.property(stableModel, (design) => {
+        const m = metrics(design);
+        return [m.overshootPct, m.undershootPct, m.settlingTime, m.riseTime as number].every(Number.isFinite);
+      }),
+      { numRuns: 300 },
+    );
+ }, 60_000);
+});

@@ -1,0 +1,209 @@
+import { describe, expect, it } from 'vitest';
+import { computeStepMetrics } from './step-metrics.js';
+import { parseDesign } from './parse-design.js';
+import type { StepMetrics } from './types.js';
+import { assertClose } from '../test/asserts.js';
+import { referenceMetrics } from '../test/ode-reference.js';
+import { systems } from '../test/reference-systems.js';
+import { pairOf, re, zpkWithDcGain } from '../test/design-builders.js';
+
+function metricsOf(design: unknown, band = 2): StepMetrics {
+  const { metrics } = computeStepMetrics(parseDesign(design), band);
+  expect(metrics).not.toBeNull();
+  return metrics as StepMetrics;
+}
+
+const standard = (zeta: number, wn: number) => ({ numerator: [wn * wn], denominator: [1, 2 * zeta * wn, wn * wn] });
+
+// The standard second-order unit-step response in closed form (Nise ch. 4;
+// Ogata ch. 5): c(t) = 1 - e^{-zeta wn t} (cos wd t + zeta/sqrt(1-zeta^2) sin wd t).
+function standardResponse(zeta: number, wn: number, t: number): number {
+  const wd = wn * Math.sqrt(1 - zeta * zeta);
+  return 1 - Math.exp(-zeta * wn * t) * (Math.cos(wd * t) + (zeta / Math.sqrt(1 - zeta * zeta)) * Math.sin(wd * t));
+}
+
+describe('computeStepMetrics against published second-order relations', () => {
+  const zetas = [0.05, 0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 0.95];
+  it.each(zetas)('%%OS = 100 exp(-zeta pi / sqrt(1 - zeta^2)) and Tp = pi / wd at zeta = %s (Nise ch. 4; Ogata ch. 5)', (zeta) => {
+    const wn = 7;
+    const m = metricsOf(standard(zeta, wn));
+    assertClose(m.overshootPct, 100 * Math.exp((-zeta * Math.PI) / Math.sqrt(1 - zeta * zeta)), 1e-9);
+    assertClose(m.peakTime, Math.PI / (wn * Math.sqrt(1 - zeta * zeta)), 1e-9);
+    assertClose(m.finalValue, 1, 1e-12);
+    expect(m.undershootPct).toBe(0);
+  });
+
+  it.each(zetas)('settling time at zeta = %s: |c(Ts) - 1| = band exactly, inside ever after; near 4/(zeta wn) (Ogata ch. 5; Nise ch. 4)', (zeta) => {
+    const wn = 3;
+    const m = metricsOf(standard(zeta, wn));
+    assertClose(Math.abs(standardResponse(zeta, wn, m.settlingTime) - 1), 0.02, 1e-7);
+    for (let k = 1; k <= 2000; k++) {
+      const t = m.settlingTime * (1 + k / 200);
+      expect(Math.abs(standardResponse(zeta, wn, t) - 1)).toBeLessThan(0.02);
+    }
+    // the 4/sigma rule is an envelope approximation: loose
+    assertClose(m.settlingTime, 4 / (zeta * wn), 0.3);
+  });
+
+  it.each([0.3, 0.5, 0.7, 0.8])('rise time at zeta = %s near (2.16 zeta + 0.60)/wn (Dorf & Bishop ch. 5)', (zeta) => {
+    const wn = 5;
+    const m = metricsOf(standard(zeta, wn));
+    assertClose(m.riseTime, (2.16 * zeta + 0.6) / wn, 0.06);
+  });
+
+  // Nise ch. 4 table of wn Tr against zeta (from memory): 1.10 at 0.1, 1.64 at 0.5, 2.88 at 0.9
+  it.each([
+    [0.1, 1.1],
+    [0.5, 1.64],
+    [0.9, 2.88],
+  ])('normalized 10-90 %% rise time wn Tr at zeta = %s is about %s (Nise ch. 4, from memory)', (zeta, table) => {
+    const m = metricsOf(standard(zeta, 1));
+    assertClose(m.riseTime, table, 0.01);
+  });
+
+  it('worked example T = 100/(s^2 + 15 s + 100): Tp 0.475, %OS 2.838, Ts 0.533 (4/sigma), Tr 0.23 (Nise ch. 4, from memory)', () => {
+    const m = metricsOf({ numerator: [100], denominator: [1, 15, 100] });
+    assertClose(m.peakTime, 0.475, 0.01);
+    assertClose(m.overshootPct, 2.838, 0.01);
+    assertClose(m.settlingTime, 0.533, 0.15);
+    assertClose(m.riseTime, 0.23, 0.05);
+    // tightly against the closed forms with zeta = 0.75, wn = 10
+    const zeta = 0.75;
+    assertClose(m.overshootPct, 100 * Math.exp((-zeta * Math.PI) / Math.sqrt(1 - zeta * zeta)), 1e-10);
+    assertClose(m.peakTime, Math.PI / (10 * Math.sqrt(1 - zeta * zeta)), 1e-10);
+    assertClose(Math.abs(standardResponse(zeta, 10, m.settlingTime) - 1), 0.02, 1e-8);
+  });
+
+  it('first-order a/(s + a): Tr = ln 9 / a ~ 2.2/a and Ts = ln 50 / a ~ 4/a, no overshoot (Nise ch. 4)', () => {
+    const a = 4;
+    const m = metricsOf({ poles: [re(-a)], gain: a });
+    assertClose(m.riseTime, Math.log(9) / a, 1e-10);
+    assertClose(m.riseTime, 2.2 / a, 0.01);
+    assertClose(m.settlingTime, Math.log(50) / a, 1e-10);
+    assertClose(m.settlingTime, 4 / a, 0.03);
+    expect(m.overshootPct).toBe(0);
+    expect(m.peakTime).toBeNull();
+  });
+
+  it('bands other than 2 %: first-order Ts = ln(100/band)/a (5 %: about 3/a, Ogata ch. 5)', () => {
+    for (const band of [1, 5, 10, 20]) {
+      const m = metricsOf({ poles: [re(-2)], gain: 2 }, band);
+      assertClose(m.settlingTime, Math.log(100 / band) / 2, 1e-10);
+      expect(m.settlingBandPct).toBe(band);
+    }
+  });
+});
+
+describe('computeStepMetrics against odex (ODEX extrapolation integrator on the state-space realisation)', () => {
+  it.each(systems)('%s: metrics agree with dense reference sampling plus refinement', (_name, design) => {
+    const model = parseDesign(design);
+    const m = metricsOf(design);
+    const ref = referenceMetrics(model.numerator, model.denominator, m.finalValue, 2, 1.3 * m.settlingTime + 1, 40000);
+    assertClose(m.overshootPct, ref.overshootPct, 1e-5, 1e-3);
+    assertClose(m.undershootPct, ref.undershootPct, 1e-5, 1e-3);
+    if (ref.peakTime === null) expect(m.peakTime).toBeNull();
+    else assertClose(m.peakTime, ref.peakTime, 1e-3, 1e-3);
+    assertClose(m.settlingTime, ref.settlingTime, 1e-4);
+    assertClose(m.riseTime, ref.riseTime, 1e-4);
+  });
+});
+
+describe('computeStepMetrics pitfalls', () => {
+  it('biproper (2s + 1)/(s + 1): y(0+) = 2 counts as 100 % overshoot at t = 0, Ts = ln 50', () => {
+    // y = 1 + e^{-t} (Nise ch. 4: first-order response plus the direct term)
+    const { metrics, notes } = computeStepMetrics(parseDesign({ numerator: [2, 1], denominator: [1, 1] }), 2);
+    assertClose(metrics?.overshootPct, 100, 1e-12);
+    expect(metrics?.peakTime).toBe(0);
+    assertClose(metrics?.settlingTime, Math.log(50), 1e-10);
+    expect(metrics?.riseTime).toBe(0);
+    expect(notes.join(' ')).toMatch(/direct feedthrough/);
+  });
+
+  it('negative DC gain: metrics of -G equal those of G, final value negative', () => {
+    const pos = metricsOf(zpkWithDcGain([...pairOf(-2, 3), re(-15)]));
+    const neg = metricsOf(zpkWithDcGain([...pairOf(-2, 3), re(-15)], [], -1));
+    assertClose(neg.finalValue, -1, 1e-12);
+    for (const k of ['overshootPct', 'peakTime', 'settlingTime', 'riseTime'] as const) assertClose(neg[k], pos[k] as number, 1e-12);
+    expect(neg.undershootPct).toBe(0);
+  });
+
+  it('a fast lightly damped pair (wn = 2000, zeta = 0.02): the peak is exact, not limited by a time grid', () => {
+    const zeta = 0.02;
+    const wn = 2000;
+    const m = metricsOf(standard(zeta, wn));
+    // a 1 ms grid would put samples ~2/3 of a period apart; the closed forms (Nise ch. 4):
+    assertClose(m.peakTime, Math.PI / (wn * Math.sqrt(1 - zeta * zeta)), 1e-10);
+    assertClose(m.overshootPct, 100 * Math.exp((-zeta * Math.PI) / Math.sqrt(1 - zeta * zeta)), 1e-10);
+  });
+
+  it('non-minimum-phase 2(1 - s)/((s + 1)(s + 2)): undershoot against odex', () => {
+    const design = { numerator: [-2, 2], denominator: [1, 3, 2] };
+    const m = metricsOf(design);
+    const ref = referenceMetrics([-2, 2], [1, 3, 2], 1, 2, 10, 40000);
+    expect(m.undershootPct).toBeGreaterThan(10);
+    assertClose(m.undershootPct, ref.undershootPct, 1e-6);
+    assertClose(m.settlingTime, ref.settlingTime, 1e-4);
+  });
+
+  it.each([
+    ['unstable', { poles: [re(0.5), re(-3)], gain: 1 }, /right half-plane/],
+    ['unstable pair', { poles: pairOf(0.2, 3), gain: 9 }, /\+0\.2 ± 3j are in the right half-plane/],
+    ['marginal', { poles: [...pairOf(0, 2), re(-1)], gain: 4 }, /±2j make the response oscillate without settling/],
+    ['integrating', { poles: [re(0), re(-2)], gain: 2 }, /pole at 0 makes the response ramp/],
+    ['double integrator', { poles: [re(0), re(0), re(-2)], gain: 2 }, /2 poles at 0/],
+  ])('%s model: metrics null with the reason', (_name, design, reason) => {
+    const { metrics, notes } = computeStepMetrics(parseDesign(design), 2);
+    expect(metrics).toBeNull();
+    expect(notes.join(' ')).toMatch(reason);
+  });
+
+  it('a zero at the origin: final value 0, metrics null with a note', () => {
+    const { metrics, notes } = computeStepMetrics(parseDesign({ poles: pairOf(-1, 2), zeros: [re(0)], gain: 5 }), 2);
+    expect(metrics).toBeNull();
+    expect(notes.join(' ')).toMatch(/final value is zero/);
+  });
+
+  it('settling is the last exit, not the first entry (zeta = 0.1 passes through the band early)', () => {
+    const zeta = 0.1;
+    const m = metricsOf(standard(zeta, 1));
+    // first entry: c rises through 0.98 before the first peak
+    expect(m.settlingTime).toBeGreaterThan(10 * (m.peakTime as number));
+    const ref = referenceMetrics([1], [1, 0.2, 1], 1, 2, 60, 60000);
+    assertClose(m.settlingTime, ref.settlingTime, 1e-4);
+  });
+
+  it('a peak after the first band entry: two lightly damped modes beating, against odex', () => {
+    const design = zpkWithDcGain([...pairOf(-0.05, 10), ...pairOf(-0.05, 11)]);
+    const model = parseDesign(design);
+    const m = metricsOf(design);
+    const ref = referenceMetrics(model.numerator, model.denominator, 1, 2, 1.2 * m.settlingTime, 400000);
+    // the global peak is at the first beat maximum (near t = pi), long after r first enters the band
+    expect(m.peakTime).toBeGreaterThan(2);
+    assertClose(m.peakTime, ref.peakTime as number, 1e-4);
+    assertClose(m.overshootPct, ref.overshootPct, 1e-5);
+    assertClose(m.settlingTime, ref.settlingTime, 1e-4);
+    assertClose(m.undershootPct, ref.undershootPct, 1e-5);
+  });
+
+  it('a slow tail from a nearly cancelled slow pole sets the settling time', () => {
+    // residue of the pole at -0.1 is about 10 % of y_f: settles only when it decays
+    const design = zpkWithDcGain([re(-0.1), ...pairOf(-5, 5)], [re(-0.11)]);
+    const model = parseDesign(design);
+    const m = metricsOf(design);
+    const ref = referenceMetrics(model.numerator, model.denominator, 1, 2, 40, 40000);
+    expect(m.settlingTime).toBeGreaterThan(5);
+    assertClose(m.settlingTime, ref.settlingTime, 1e-4);
+  });
+
+  it('a 200-pole model whose modal terms cancel: metrics null with a note, not noise', () => {
+    const poles = Array.from({ length: 100 }, (_, k) => pairOf(-0.5 - k * 0.05, 1 + k * 0.1)).flat();
+    const { metrics, notes } = computeStepMetrics(parseDesign({ poles, gain: 1 }), 2);
+    expect(metrics).toBeNull();
+    expect(notes.join(' ')).toMatch(/too ill-conditioned/);
+  });
+
+  it('a pure gain settles at once', () => {
+    const m = metricsOf({ numerator: [3], denominator: [1] });
+    expect(m).toMatchObject({ finalValue: 3, overshootPct: 0, undershootPct: 0, peakTime: null, settlingTime: 0, riseTime: 0 });
+  });
+});

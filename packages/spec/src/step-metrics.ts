@@ -1,0 +1,322 @@
+// Exact step-response metrics, grid-free: "sign bracketing of the analytic
+// derivative on a pole-derived step, then safeguarded Newton (Newton with a
+// bisection fallback) on the analytic expression for every time".
+//
+// On r(t) = y(t)/y_f (y_f = G(0)) from the modal form:
+// 1. Horizon. T is where the bound B(t) of |r - 1| (transient-horizon.ts)
+//    drops below min(band, 10 %) for good, so no band crossing and no 10 % or
+//    90 % crossing lies beyond T. If the largest overshoot found so far is
+//    smaller than B(T), the scan goes on until B falls below it (at least
+//    1e-9), so a late peak and a slow tail are both caught.
+// 2. Bracketing. The step is 1/|p| of the fastest pole still significant at t
+//    (its term above 1e-10 of y_f), about a third of the half-period of its
+//    oscillation and one time constant of its decay, growing as fast modes
+//    die out. In each step a sign change of r' brackets one extremum; when r'
+//    keeps its sign but r'' changes it, r' is checked at the root of r'' so a
+//    pair of close extrema inside one step is caught too.
+// 3. Refinement. Each extremum (root of r', Newton with r'') and each level
+//    crossing (r = 0.1, 0.9, 1 +- band, Newton with r') is refined to about
+//    1e-15 relative inside its bracket. Between consecutive extrema r is
+//    monotone, so a crossing is bracketed exactly by comparing end values.
+// Definitions: overshoot = max(0, max r - 1) x 100; undershoot =
+// max(0, -min r) x 100; peak time = time of the global maximum (null without
+// overshoot); settling time = the last time |r - 1| equals the band (0 if r
+// never leaves it); rise time = first 90 % crossing minus first 10 %
+// crossing. y(0+) counts (a biproper model may overshoot at t = 0+).
+import type { Model, StepMetrics } from './types.js';
+import { stability } from './is-stable.js';
+import { dcGain } from './dc-gain.js';
+import { partialFractions } from './partial-fractions.js';
+import { packResponse, type PackedResponse } from './pack-response.js';
+import { evalResponse } from './eval-response.js';
+import { transientBound, transientHorizon } from './transient-horizon.js';
+import { formatNumber } from './format-complex.js';
+
+/** Overshoot or undershoot below 1e-9 of y_f is round-off, reported as none. */
+const FLOOR = 1e-9;
+/** A term smaller than this (relative to y_f) no longer sets the step. */
+const SIGNIFICANT = 1e-10;
+const STEP_FACTOR = 1;
+/** Largest acceptable round-off of the modal sum, relative to y_f. */
+const MAX_ROUNDING = 1e-8;
+/** Refuse, with a note, a scan that would take more steps than this. */
+const MAX_STEPS = 2_000_000;
+
+const buf = new Float64Array(4);
+
+export function computeStepMetrics(model: Model, settlingBandPct: number): { metrics: StepMetrics | null; notes: string[] } {
+  const st = stability(model);
+  if (!st.stable) return { metrics: null, notes: [st.reason ?? 'the model is not stable'] };
+  const yf = dcGain(model);
+  if (yf === null || yf === 0) {
+    return {
+      metrics: null,
+      notes: ['the final value is zero (a zero at the origin), so overshoot, settling and rise time relative to it are undefined'],
+    };
+  }
+  const notes: string[] = [];
+  const p = packResponse(partialFractions(model), 1 / yf);
+  // The modal sum cancels when residues dwarf the final value (high order,
+  // clustered poles): its round-off is about eps * sum |C_k|. Past 1e-8 of
+  // y_f the metrics would be noise, so say so instead of printing them.
+  const spread = transientBound(p, 0);
+  if (spread * 2.220446049250313e-16 > MAX_ROUNDING) {
+    return {
+      metrics: null,
+      notes: [
+        `the modal form of this model is too ill-conditioned for exact metrics (its terms reach ${formatNumber(spread)} times the final value and cancel); check the pole and zero placement or reduce the model`,
+      ],
+    };
+  }
+  const band = settlingBandPct / 100;
+  const tSettle = transientHorizon(p, Math.min(band, 0.1));
+  if (estimateSteps(p, tSettle) > MAX_STEPS) {
+    return {
+      metrics: null,
+      notes: ['the response is too lightly damped for an exact scan (more than 2 million oscillation steps before it settles)'],
+    };
+  }
+  const s = new Scan(p, band);
+  s.run(tSettle);
+  // a later peak could still beat the largest overshoot found: scan on
+  const target = Math.max(s.rMax - 1, FLOOR);
+  if (transientBound(p, tSettle) >= target) {
+    const tPeak = transientHorizon(p, target);
+    if (tPeak > tSettle && estimateSteps(p, tPeak) <= MAX_STEPS) s.run(tPeak);
+  }
+  const overshoot = s.rMax - 1 > FLOOR ? (s.rMax - 1) * 100 : 0;
+  const undershoot = -s.rMin > FLOOR ? -s.rMin * 100 : 0;
+  // entryLevel: 0 = never outside the band; NaN cannot remain (r ends inside)
+  const settlingTime =
+    s.entryLevel === 0
+      ? 0
+      : Number.isNaN(s.entryLevel)
+        ? s.t
+        : refine(p, 0, s.entryLevel, s.entryA, s.entryB, s.entryRA - s.entryLevel, s.entryRB - s.entryLevel);
+  const r0 = s.r0;
+  if (model.zeros.length === model.poles.length && model.poles.length > 0) {
+    notes.push(`the model has direct feedthrough: the response jumps to ${formatNumber(r0 * 100)} % of its final value at t = 0+`);
+  }
+  if (yf < 0) notes.push('the DC gain is negative: metrics are taken on y / y_f, so they read as for a positive step response');
+  return {
+    metrics: {
+      finalValue: yf,
+      overshootPct: overshoot,
+      undershootPct: undershoot,
+      peakTime: overshoot > 0 ? s.tMax : null,
+      settlingTime,
+      settlingBandPct,
+      riseTime: s.t90 - s.t10,
+    },
+    notes,
+  };
+}
+
+// Upper estimate of the bracketing steps: each term sets the step while it is
+// significant, for at most the horizon.
+function estimateSteps(p: PackedResponse, horizon: number): number {
+  let steps = 0;
+  for (let k = 0; k < p.count; k++) {
+    if (!p.transient[k]) continue;
+    const m = p.degree[k] as number;
+    const off = p.offset[k] as number;
+    let c = 0;
+    for (let n = 0; n < m; n++) c += p.bound[off + n] as number;
+    const rate = -(p.sigma[k] as number);
+    const alive = Math.min(horizon, (Math.log(Math.max(c, SIGNIFICANT) / SIGNIFICANT) + 2 * m) / rate);
+    steps += (alive * (p.speed[k] as number)) / STEP_FACTOR;
+  }
+  return steps;
+}
+
+class Scan {
+  readonly p: PackedResponse;
+  readonly band: number;
+  t = 0;
+  r: number;
+  d: number;
+  dd: number;
+  fastest: number;
+  /** Direction of r on the current step: +1 rising, -1 falling. */
+  dir: number;
+  r0: number;
+  rMax: number;
+  tMax = 0;
+  rMin: number;
+  t10 = Number.NaN;
+  t90 = Number.NaN;
+  /** Last piece that enters the band: [entryA, entryB], crossing r = entryLevel (0: none). */
+  entryA = 0;
+  entryB = 0;
+  entryRA = 0;
+  entryRB = 0;
+  entryLevel = 0;
+
+  constructor(p: PackedResponse, band: number) {
+    this.p = p;
+    this.band = band;
+    this.fastest = evalResponse(p, 0, 4, buf, SIGNIFICANT);
+    this.r = buf[0] as number;
+    this.d = buf[1] as number;
+    this.dd = buf[2] as number;
+    this.r0 = this.r;
+    this.rMax = this.r;
+    this.rMin = this.r;
+    if (this.r >= 0.1) this.t10 = 0;
+    if (this.r >= 0.9) this.t90 = 0;
+    // r'(0+) is often exactly zero in theory (relative degree >= 2) and
+    // round-off in practice: then the first non-negligible derivative decides.
+    const noise = 1e-10 * levelScale(p);
+    this.dir = Math.sign(this.d);
+    if (Math.abs(this.d) <= noise) {
+      this.dir = Math.sign(this.dd) || Math.sign(buf[3] as number) || 1;
+      this.d = this.dir * Number.MIN_VALUE; // keeps brackets consistent with dir
+    }
+  }
+
+  run(tEnd: number): void {
+    const p = this.p;
+    while (this.t < tEnd) {
+      const h = this.fastest > 0 ? STEP_FACTOR / this.fastest : tEnd - this.t;
+      const a = this.t;
+      const b = Math.min(a + h, tEnd);
+      const ra = this.r;
+      const dda = this.dd;
+      const fastest = evalResponse(p, b, 3, buf, SIGNIFICANT);
+      const rb = buf[0] as number;
+      const db = buf[1] as number;
+      const ddb = buf[2] as number;
+      const dirB = db > 0 ? 1 : db < 0 ? -1 : this.dir;
+      if (dirB !== this.dir) {
+        const c = refine(p, 1, 0, a, b, this.d, db);
+        const rc = valueAt(p, c);
+        this.piece(a, ra, c, rc);
+        this.extremum(c, rc, this.dir);
+        this.piece(c, rc, b, rb);
+      } else if (Math.sign(dda) * Math.sign(ddb) < 0 && mayDip(this.d, db, dda, ddb, b - a)) {
+        // r' may dip across zero and back inside this step
+        const m = refine(p, 2, 0, a, b, dda, ddb);
+        evalResponse(p, m, 2, buf);
+        const dm = buf[1] as number;
+        if (Math.sign(dm) === -this.dir && dm !== 0) {
+          const c1 = refine(p, 1, 0, a, m, this.d, dm);
+          const c2 = refine(p, 1, 0, m, b, dm, db);
+          const r1 = valueAt(p, c1);
+          const r2 = valueAt(p, c2);
+          this.piece(a, ra, c1, r1);
+          this.extremum(c1, r1, this.dir);
+          this.piece(c1, r1, c2, r2);
+          this.extremum(c2, r2, -this.dir);
+          this.piece(c2, r2, b, rb);
+        } else this.piece(a, ra, b, rb);
+      } else this.piece(a, ra, b, rb);
+      this.t = b;
+      this.r = rb;
+      this.d = db;
+      this.dd = ddb;
+      this.dir = dirB;
+      this.fastest = fastest;
+    }
+  }
+
+  private extremum(t: number, r: number, dirBefore: number): void {
+    if (dirBefore > 0 && r > this.rMax) {
+      this.rMax = r;
+      this.tMax = t;
+    } else if (dirBefore < 0 && r < this.rMin) {
+      this.rMin = r;
+    }
+  }
+
+  // r is monotone on [a, b]
+  private piece(a: number, ra: number, b: number, rb: number): void {
+    const p = this.p;
+    if (Number.isNaN(this.t10) && rb >= 0.1) this.t10 = ra >= 0.1 ? a : refine(p, 0, 0.1, a, b, ra - 0.1, rb - 0.1);
+    if (Number.isNaN(this.t90) && rb >= 0.9) this.t90 = ra >= 0.9 ? a : refine(p, 0, 0.9, a, b, ra - 0.9, rb - 0.9);
+    const outA = Math.abs(ra - 1) >= this.band;
+    const outB = Math.abs(rb - 1) >= this.band;
+    if (outA && !outB) {
+      this.entryA = a;
+      this.entryB = b;
+      this.entryRA = ra;
+      this.entryRB = rb;
+      this.entryLevel = ra > 1 ? 1 + this.band : 1 - this.band;
+    } else if (outB) this.entryLevel = Number.NaN; // outside again: a later entry must follow
+  }
+}
+
+function levelScale(p: PackedResponse): number {
+  let s = 0;
+  for (let k = 0; k < p.count; k++) {
+    const off = p.offset[k] as number;
+    s += Math.abs((p.cos[1] as Float64Array)[off] as number) + Math.abs((p.cos[2] as Float64Array)[off] as number);
+  }
+  return s;
+}
+
+function valueAt(p: PackedResponse, t: number): number {
+  evalResponse(p, t, 1, buf);
+  return buf[0] as number;
+}
+
+// Root of F_level(t) = target in [a, b] (a sign change is assumed; fa, fb
+// are F_level - target at the ends), by safeguarded Newton with F_{level+1}
+// as the slope (Press et al., Numerical Recipes, rtsafe): a Newton step that
+// would leave the bracket or not halve the error is replaced by bisection.
+// Starts from the secant point; stops when the Newton step falls below
+// 1e-12 of t, after which quadratic convergence leaves an error far below it.
+export function refine(p: PackedResponse, level: number, target: number, a: number, b: number, fa: number, fb: number): number {
+  if (fa === 0) return a;
+  if (fb === 0) return b;
+  let lo = fa < 0 ? a : b;
+  let hi = fa < 0 ? b : a;
+  let x = a - (fa * (b - a)) / (fb - fa);
+  if (!(x > Math.min(a, b) && x < Math.max(a, b))) x = 0.5 * (a + b);
+  let dxOld = Math.abs(b - a);
+  let dx = dxOld;
+  evalResponse(p, x, level + 2, buf);
+  let f = (buf[level] as number) - target;
+  let df = buf[level + 1] as number;
+  if (f === 0) return x;
+  if (f < 0) lo = x;
+  else hi = x;
+  for (let it = 0; it < 100; it++) {
+    if (((x - hi) * df - f) * ((x - lo) * df - f) > 0 || Math.abs(2 * f) > Math.abs(dxOld * df)) {
+      dxOld = dx;
+      dx = 0.5 * (hi - lo);
+      x = lo + dx;
+      if (Math.abs(dx) <= 2e-16 * Math.abs(x)) return x;
+    } else {
+      dxOld = dx;
+      dx = f / df;
+      x -= dx;
+      if (Math.abs(dx) <= 1e-12 * Math.abs(x)) return x;
+    }
+    evalResponse(p, x, level + 2, buf);
+    f = (buf[level] as number) - target;
+    df = buf[level + 1] as number;
+    if (f === 0) return x;
+    if (f < 0) lo = x;
+    else hi = x;
+  }
+  return x;
+}
+
+// Could r' change sign twice inside [0, h]? The cubic Hermite interpolant of
+// r' from its end values and slopes answers cheaply when it stays clearly on
+// one side (at least 10 % of the end values); only otherwise is the exact
+// check (root of r'', r' there) paid for.
+function mayDip(d0: number, d1: number, s0: number, s1: number, h: number): boolean {
+  const m0 = s0 * h;
+  const m1 = s1 * h;
+  const margin = 0.1 * Math.max(Math.abs(d0), Math.abs(d1));
+  const sign = Math.sign(d0);
+  for (let k = 1; k < 8; k++) {
+    const u = k / 8;
+    const u2 = u * u;
+    const u3 = u2 * u;
+    const v = (2 * u3 - 3 * u2 + 1) * d0 + (u3 - 2 * u2 + u) * m0 + (-2 * u3 + 3 * u2) * d1 + (u3 - u2) * m1;
+    if (sign * v < margin) return true;
+  }
+  return false;
+}
