@@ -18,6 +18,7 @@ const resultsDir = path.join(root, '.test-results');
 const suites = [
   { name: 'engine', filter: '@polecourt/spec' },
   { name: 'contracts', filter: '@polecourt/contracts' },
+  { name: 'plots', filter: '@polecourt/plots' },
   { name: 'web', filter: '@polecourt/web' },
   { name: 'api', filter: '@polecourt/api', needsDb: true },
   { name: 'browser', filter: '@polecourt/tests', needsDb: true },

@@ -3,7 +3,7 @@ import { start, stop } from '@polecourt/api';
 /** The whole product in-process: API plus the built client, on a free port. */
 export async function startApp(): Promise<string> {
   if (!process.env.DB_PASSWORD) throw new Error('Browser tests need the test database: run them through `npm test`.');
-  const running = await start({ PORT: '0', LOG_LEVEL: 'silent' });
+  const running = await start({ PORT: '0', SMTP_PORT: '0', S3_PORT: '0', LOG_LEVEL: 'silent' });
   return running.url;
 }
 

@@ -7,9 +7,18 @@ import session from 'express-session';
 import helmet from 'helmet';
 import type { Sequelize } from 'sequelize';
 
+import { assessmentRoutes } from './components/assessments/routes.js';
 import { auditRoutes } from './components/audit/routes.js';
 import { authRoutes } from './components/auth/routes.js';
+import { candidateRoutes } from './components/candidates/routes.js';
+import { coverageRoutes } from './components/coverage/routes.js';
 import { healthRoutes } from './components/health/routes.js';
+import { productLineRoutes } from './components/product-lines/routes.js';
+import { requirementSetRoutes } from './components/requirement-sets/routes.js';
+import { revisionRoutes } from './components/revisions/routes.js';
+import { outboxRoutes } from './components/mail/routes.js';
+import { reportRoutes } from './components/reports/routes.js';
+import { inviteRoutes, passwordRoutes } from './components/passwords/routes.js';
 import { userRoutes } from './components/users/routes.js';
 import type { Config } from './config.js';
 import { csrfGuard, loadUser } from './lib/auth-middleware.js';
@@ -84,8 +93,14 @@ export function buildApp(config: Config, sequelize: Sequelize): BuiltApp {
   );
 
   app.use('/api/auth', authRoutes(SESSION_COOKIE));
+  app.use('/api/auth', passwordRoutes());
+  app.use('/api/users', inviteRoutes());
   app.use('/api/users', userRoutes());
+  app.use('/api/outbox', outboxRoutes());
   app.use('/api/audit-events', auditRoutes());
+  // The core workflow: each router names its full paths under /api.
+  app.use('/api', productLineRoutes(), requirementSetRoutes(), revisionRoutes(), candidateRoutes(), assessmentRoutes(), coverageRoutes());
+  app.use('/api', reportRoutes());
   app.all('/api/{*rest}', notFoundApi);
 
   const webDist = config.WEB_DIST ?? path.resolve(import.meta.dirname, '../../web/dist');

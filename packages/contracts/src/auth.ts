@@ -1,5 +1,6 @@
 import { z } from 'zod';
 
+import { isCommonPassword } from './common-passwords.js';
 import { ROLES } from './roles.js';
 
 export const loginSchema = z.object({
@@ -13,7 +14,8 @@ export const MIN_PASSWORD_LENGTH = 12;
 export const passwordSchema = z
   .string()
   .min(MIN_PASSWORD_LENGTH, `Password must be at least ${MIN_PASSWORD_LENGTH} characters`)
-  .max(200, 'Password is too long');
+  .max(200, 'Password is too long')
+  .refine((p) => !isCommonPassword(p), 'This password is one of the first anyone would guess; choose another');
 
 export const roleSchema = z.enum(ROLES, { message: 'Pick one of the four roles' });
 
@@ -21,7 +23,10 @@ export const createUserSchema = z.object({
   email: z.string().trim().toLowerCase().email('Enter a valid e-mail address').max(254),
   name: z.string().trim().min(1, 'Enter the person’s name').max(120, 'Name is too long'),
   role: roleSchema,
-  password: passwordSchema,
+  // Left out, the account gets an invitation e-mail with a one-time link to set
+  // its own password. Given (scripts, pipelines), the account can sign in at once
+  // and no invitation is sent.
+  password: passwordSchema.optional(),
 });
 export type CreateUserInput = z.infer<typeof createUserSchema>;
 
@@ -49,4 +54,28 @@ export interface PublicUser {
 export interface SessionInfo {
   user: Pick<PublicUser, 'id' | 'email' | 'name' | 'role'>;
   csrfToken: string;
+}
+
+export const INVITE_TOKEN_HOURS = 72;
+export const RESET_TOKEN_HOURS = 1;
+
+export const setPasswordSchema = z.object({
+  token: z.string().trim().min(1, 'The link has no token; open the link from the e-mail again').max(200, 'The token is too long'),
+  password: passwordSchema,
+});
+export type SetPasswordInput = z.infer<typeof setPasswordSchema>;
+
+export const requestResetSchema = z.object({
+  email: z.string().trim().toLowerCase().min(1, 'Enter your e-mail address').email('Enter a valid e-mail address').max(254),
+});
+export type RequestResetInput = z.infer<typeof requestResetSchema>;
+
+/** What POST /api/auth/request-reset always answers (202), whether or not the account exists. */
+export interface RequestResetReply {
+  message: string;
+}
+
+/** What POST /api/auth/set-password answers once the password is set. */
+export interface SetPasswordReply {
+  email: string;
 }

@@ -12,7 +12,15 @@ export const productLineInputSchema = z
   .strict();
 export type ProductLineInput = z.input<typeof productLineInputSchema>;
 
-export const productLinePatchSchema = productLineInputSchema.partial().strict().refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+// Spelled out rather than `.partial()`: zod 4 applies inner defaults inside
+// optional members, so a partial would blank the description on every rename.
+export const productLinePatchSchema = z
+  .object({
+    name: productLineInputSchema.shape.name.optional(),
+    description: z.string().trim().max(4000, 'Description is too long (4000 characters at most)').optional(),
+  })
+  .strict()
+  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 
 export const requirementSetInputSchema = z
   .object({

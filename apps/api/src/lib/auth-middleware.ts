@@ -47,11 +47,15 @@ export function currentUser(req: Request): SessionUser {
 }
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
-const CSRF_EXEMPT = new Set(['/api/auth/login']);
+// Like sign-in, these act on no session's identity: set-password needs the secret
+// token from the e-mail, request-reset only mails the account's owner. A page
+// opened from an e-mail link has no CSRF token yet, even in a signed-in browser.
+const CSRF_EXEMPT = new Set(['/api/auth/login', '/api/auth/set-password', '/api/auth/request-reset']);
 
 /** Every state-changing request of a signed-in session must echo its CSRF token. */
 export function csrfGuard(req: Request, _res: Response, next: NextFunction): void {
-  if (SAFE_METHODS.has(req.method) || CSRF_EXEMPT.has(req.path)) return next();
+  // Mounted under /api, where req.path is relative to the mount: compare the full path.
+  if (SAFE_METHODS.has(req.method) || CSRF_EXEMPT.has(req.baseUrl + req.path)) return next();
   const expected = req.session?.csrfToken;
   if (!expected) return next(); // not signed in: the route's own auth check answers 401
   const sent = req.get('x-csrf-token') ?? '';

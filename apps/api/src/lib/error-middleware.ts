@@ -1,10 +1,10 @@
 import type { NextFunction, Request, Response } from 'express';
-import { BaseError, ConnectionError, TimeoutError } from 'sequelize';
+import { BaseError, ConnectionError, TimeoutError, UniqueConstraintError } from 'sequelize';
 
 import { AppError } from './app-error.js';
 import { logger } from './logger.js';
 
-const DB_DOWN_CODES = new Set(['ECONNREFUSED', 'ER_GET_CONNECTION_TIMEOUT', 'ECONNRESET', 'ER_SOCKET_UNEXPECTED_CLOSE', 'ER_CONNECTION_ALREADY_CLOSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ER_POOL_ALREADY_CLOSED']);
+const DB_DOWN_CODES = new Set(['ER_CONNECTION_KILLED', 'ER_SERVER_SHUTDOWN', 'ECONNREFUSED', 'ER_GET_CONNECTION_TIMEOUT', 'ECONNRESET', 'ER_SOCKET_UNEXPECTED_CLOSE', 'ER_CONNECTION_ALREADY_CLOSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ER_POOL_ALREADY_CLOSED']);
 
 function isDbDown(err: unknown): boolean {
   if (err instanceof ConnectionError || err instanceof TimeoutError) return true;
@@ -16,9 +16,26 @@ function isDbDown(err: unknown): boolean {
   return typeof code === 'string' && DB_DOWN_CODES.has(code);
 }
 
+// A trigger's SIGNAL SQLSTATE '45000' (e.g. on a change to an approved
+// revision) is a refused write: 409, its code taken from the message
+// ("revision_frozen: ...").
+function triggerRefusal(err: unknown): AppError | null {
+  if (!(err instanceof BaseError)) return null;
+  const parent = (err as BaseError & { parent?: { sqlState?: string; text?: string; sqlMessage?: string } }).parent;
+  if (parent?.sqlState !== '45000') return null;
+  const text = parent.text ?? parent.sqlMessage ?? '';
+  const code = /^([a-z_]+):/.exec(text)?.[1] ?? 'conflict';
+  const message = code === 'revision_frozen' ? 'This revision is approved or retired and can never change again. Write a new revision instead.' : 'The database refused this change.';
+  return AppError.conflict(code, message);
+}
+
 /** Turns anything thrown into an AppError with a contract status. */
 export function normalizeError(err: unknown): AppError {
   if (err instanceof AppError) return err;
+  const refused = triggerRefusal(err);
+  if (refused) return refused;
+  // Two writers raced past a use case's own name check: the unique index decides.
+  if (err instanceof UniqueConstraintError) return AppError.conflict('already_exists', 'Something with that name already exists; pick another name.');
   // The engine's input error (matched by name so two copies of the package still agree).
   if (err instanceof Error && err.name === 'SpecInputError') {
     const { code, path: field } = err as Error & { code: string; path: string };

@@ -1,11 +1,12 @@
 import { start, stop, type Running } from '../../src/server.js';
 
 /** Starts the API in-process on an ephemeral port against the test database. */
-export async function startTestServer(): Promise<Running> {
+export async function startTestServer(overrides: Record<string, string> = {}): Promise<Running> {
   if (!process.env.DB_PASSWORD) {
     throw new Error('The API tests need the test database: run them through `npm test` (or `npm test -- api`).');
   }
-  return start({ PORT: '0', LOG_LEVEL: 'silent', NODE_ENV: 'test' });
+  // SMTP_PORT 0: the mail fake takes a free port, so test runs never collide with `npm start`.
+  return start({ PORT: '0', SMTP_PORT: '0', LOG_LEVEL: 'silent', NODE_ENV: 'test', ...overrides });
 }
 
 export { stop as stopTestServer };

@@ -1,5 +1,6 @@
-import type { Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 
+import { getSequelize } from '../../lib/transaction.js';
 import { ProductLineModel } from './model.js';
 
 export interface ProductLineRecord {
@@ -9,6 +10,11 @@ export interface ProductLineRecord {
   createdBy: number | null;
   createdAt: string;
   updatedAt: string;
+}
+
+export interface ProductLineCounts {
+  requirementSetCount: number;
+  candidateCount: number;
 }
 
 function toRecord(row: ProductLineModel | null): ProductLineRecord | null {
@@ -41,5 +47,26 @@ export const productLineRepository = {
   async update(id: number, changes: Partial<{ name: string; description: string }>, transaction?: Transaction): Promise<ProductLineRecord | null> {
     await ProductLineModel.update(changes, { where: { id }, transaction });
     return toRecord(await ProductLineModel.findByPk(id, { transaction }));
+  },
+  /** Requirement-set and candidate counts for the given lines, in two grouped queries. */
+  async countsFor(ids: number[]): Promise<Map<number, ProductLineCounts>> {
+    const out = new Map<number, ProductLineCounts>(ids.map((id) => [id, { requirementSetCount: 0, candidateCount: 0 }]));
+    if (ids.length === 0) return out;
+    const sequelize = getSequelize();
+    const sets = await sequelize.query<{ id: number; n: number }>(
+      'SELECT product_line_id AS id, COUNT(*) AS n FROM requirement_sets WHERE product_line_id IN (:ids) GROUP BY product_line_id',
+      { replacements: { ids }, type: QueryTypes.SELECT },
+    );
+    const candidates = await sequelize.query<{ id: number; n: number }>(
+      'SELECT product_line_id AS id, COUNT(*) AS n FROM candidates WHERE product_line_id IN (:ids) GROUP BY product_line_id',
+      { replacements: { ids }, type: QueryTypes.SELECT },
+    );
+    for (const r of sets) out.get(Number(r.id))!.requirementSetCount = Number(r.n);
+    for (const r of candidates) out.get(Number(r.id))!.candidateCount = Number(r.n);
+    return out;
+  },
+  /** Locks the line row so concurrent writers of its children line up. */
+  async lock(id: number, transaction: Transaction): Promise<ProductLineRecord | null> {
+    return toRecord(await ProductLineModel.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE }));
   },
 };

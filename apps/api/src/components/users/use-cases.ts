@@ -5,6 +5,7 @@ import { hashPassword } from '../../lib/password.js';
 import type { SessionUser } from '../../lib/request-context.js';
 import { inTransaction } from '../../lib/transaction.js';
 import { recordAudit } from '../audit/record-audit.js';
+import { issueInvitation } from '../passwords/use-cases.js';
 import { toPublicUser, userRepository } from './repository.js';
 
 export async function listUsers(limit: number, offset: number): Promise<{ items: PublicUser[]; total: number }> {
@@ -15,11 +16,13 @@ export async function listUsers(limit: number, offset: number): Promise<{ items:
 export async function createUser(actor: SessionUser, input: CreateUserInput): Promise<PublicUser> {
   const existing = await userRepository.findByEmail(input.email);
   if (existing) throw AppError.conflict('email_taken', `There is already an account for ${input.email}.`);
-  const passwordHash = await hashPassword(input.password);
+  // Without a password the account cannot sign in until the person uses the invitation link.
+  const passwordHash = input.password ? await hashPassword(input.password) : null;
   return inTransaction(async (t) => {
     const user = await userRepository.create({ email: input.email, name: input.name, role: input.role, passwordHash }, t);
     const pub = toPublicUser(user);
     await recordAudit(t, actor, { action: 'user.create', entityType: 'user', entityId: user.id, after: pub });
+    if (!passwordHash) await issueInvitation(t, actor, user);
     return pub;
   });
 }

@@ -1,0 +1,140 @@
+import { Op, type Transaction } from 'sequelize';
+
+import type { ImpactAcknowledgement, Revision, RevisionStatus } from '@polecourt/contracts';
+
+import { personOrUnknown, personRefs } from '../../lib/person-refs.js';
+import { RevisionModel } from './model.js';
+
+/** A revision as stored, plus the person fields; what use cases work with. */
+export interface RevisionRecord {
+  id: number;
+  requirementSetId: number;
+  number: number;
+  status: RevisionStatus;
+  requirements: Record<string, number>;
+  rationale: string;
+  version: number;
+  authorId: number;
+  approverId: number | null;
+  submittedAt: string | null;
+  approvedAt: string | null;
+  retiredAt: string | null;
+  sha256: string | null;
+  approvalMeaning: 'approved' | null;
+  impact: ImpactAcknowledgement | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+const iso = (d: Date | string | null | undefined): string | null => (d ? new Date(d).toISOString() : null);
+
+function toRecord(row: RevisionModel | null): RevisionRecord | null {
+  if (!row) return null;
+  const r = row.get({ plain: true });
+  return {
+    id: r.id,
+    requirementSetId: r.requirementSetId,
+    number: r.number,
+    status: r.status,
+    requirements: JSON.parse(r.requirementsJson) as Record<string, number>,
+    rationale: r.rationale,
+    version: r.version,
+    authorId: r.authorId,
+    approverId: r.approverId ?? null,
+    submittedAt: iso(r.submittedAt),
+    approvedAt: iso(r.approvedAt),
+    retiredAt: iso(r.retiredAt),
+    sha256: r.sha256 ?? null,
+    approvalMeaning: r.approvalMeaning === 'approved' ? 'approved' : null,
+    impact: r.impactJson ? (JSON.parse(r.impactJson) as ImpactAcknowledgement) : null,
+    createdAt: iso(r.createdAt)!,
+    updatedAt: iso(r.updatedAt)!,
+  };
+}
+
+export interface RevisionChanges {
+  status?: RevisionStatus;
+  requirements?: Record<string, number>;
+  rationale?: string;
+  version?: number;
+  approverId?: number;
+  submittedAt?: Date;
+  approvedAt?: Date;
+  retiredAt?: Date;
+  sha256?: string;
+  approvalMeaning?: 'approved';
+  impact?: ImpactAcknowledgement;
+}
+
+function toColumns(c: RevisionChanges): Partial<RevisionModel> {
+  const { requirements, impact, ...rest } = c;
+  return {
+    ...rest,
+    ...(requirements !== undefined ? { requirementsJson: JSON.stringify(requirements) } : {}),
+    ...(impact !== undefined ? { impactJson: JSON.stringify(impact) } : {}),
+  } as Partial<RevisionModel>;
+}
+
+export const revisionRepository = {
+  async findById(id: number, transaction?: Transaction): Promise<RevisionRecord | null> {
+    return toRecord(await RevisionModel.findByPk(id, { transaction }));
+  },
+  async lock(id: number, transaction: Transaction): Promise<RevisionRecord | null> {
+    return toRecord(await RevisionModel.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE }));
+  },
+  async listBySet(requirementSetId: number, transaction?: Transaction): Promise<RevisionRecord[]> {
+    const rows = await RevisionModel.findAll({ where: { requirementSetId }, order: [['number', 'DESC']], transaction });
+    return rows.map((r) => toRecord(r)!);
+  },
+  async findApproved(requirementSetId: number, transaction?: Transaction): Promise<RevisionRecord | null> {
+    return toRecord(await RevisionModel.findOne({ where: { requirementSetId, status: 'approved' }, transaction }));
+  },
+  async findApprovedInSets(setIds: number[], transaction?: Transaction): Promise<RevisionRecord[]> {
+    if (setIds.length === 0) return [];
+    const rows = await RevisionModel.findAll({ where: { requirementSetId: { [Op.in]: setIds }, status: 'approved' }, order: [['requirementSetId', 'ASC']], transaction });
+    return rows.map((r) => toRecord(r)!);
+  },
+  async findByIds(ids: number[], transaction?: Transaction): Promise<RevisionRecord[]> {
+    if (ids.length === 0) return [];
+    const rows = await RevisionModel.findAll({ where: { id: { [Op.in]: ids } }, transaction });
+    return rows.map((r) => toRecord(r)!);
+  },
+  async nextNumber(requirementSetId: number, transaction: Transaction): Promise<number> {
+    const max = (await RevisionModel.max('number', { where: { requirementSetId }, transaction })) as number | null;
+    return (Number(max) || 0) + 1;
+  },
+  async create(
+    data: { requirementSetId: number; number: number; requirements: Record<string, number>; rationale: string; authorId: number },
+    transaction: Transaction,
+  ): Promise<RevisionRecord> {
+    const row = await RevisionModel.create(
+      {
+        requirementSetId: data.requirementSetId,
+        number: data.number,
+        status: 'draft',
+        requirementsJson: JSON.stringify(data.requirements),
+        rationale: data.rationale,
+        authorId: data.authorId,
+      },
+      { transaction },
+    );
+    return toRecord(await RevisionModel.findByPk(row.id, { transaction }))!;
+  },
+  async update(id: number, changes: RevisionChanges, transaction: Transaction): Promise<RevisionRecord> {
+    await RevisionModel.update(toColumns(changes), { where: { id }, transaction });
+    return toRecord(await RevisionModel.findByPk(id, { transaction }))!;
+  },
+};
+
+/** The contract's Revision: the record with author and approver named. */
+export async function toRevisions(records: RevisionRecord[], transaction?: Transaction): Promise<Revision[]> {
+  const people = await personRefs(records.flatMap((r) => [r.authorId, r.approverId]), transaction);
+  return records.map((r) => {
+    const { authorId, approverId, ...rest } = r;
+    return { ...rest, author: personOrUnknown(people, authorId)!, approver: personOrUnknown(people, approverId) };
+  });
+}
+
+export async function toRevision(record: RevisionRecord, transaction?: Transaction): Promise<Revision> {
+  return (await toRevisions([record], transaction))[0]!;
+}
