@@ -1,5 +1,6 @@
 // `npm start`: install what is missing, start MariaDB on loopback, migrate,
 // seed the demo once, build, and serve API and client on one port.
+import net from 'node:net';
 import path from 'node:path';
 
 import { buildAll } from './lib/build.mjs';
@@ -31,14 +32,21 @@ async function main() {
 
   buildAll(root);
 
+  if (!(await portFree(port, env.HOST))) {
+    throw new Error(`port ${port} is already in use (is Polecourt already running?). Stop it, or set PORT to a free port.`);
+  }
   step(`starting Polecourt on http://${env.HOST}:${port}`);
   const server = spawnChild(tsxBin(root), ['src/main.ts'], { cwd: api, env });
   const forward = (sig) => server.kill(sig);
   process.on('SIGINT', forward);
   process.on('SIGTERM', forward);
-  server.on('exit', (code) => process.exit(code ?? 0));
+  let exited = false;
+  server.on('exit', (code) => {
+    exited = true;
+    process.exit(code ?? 0);
+  });
 
-  for (let i = 0; i < 100; i++) {
+  for (let i = 0; i < 100 && !exited; i++) {
     try {
       const r = await fetch(`http://127.0.0.1:${port}/api/health`);
       if (r.ok) break;
@@ -47,6 +55,7 @@ async function main() {
     }
     await sleep(200);
   }
+  if (exited) return;
   console.log(`
   Polecourt is running: http://${env.HOST}:${port}
 
@@ -58,6 +67,14 @@ async function main() {
 
   Ctrl-C stops the server; \`npm run stop\` also stops the database.
 `);
+}
+
+function portFree(p, host) {
+  return new Promise((resolve) => {
+    const probe = net.createServer();
+    probe.once('error', () => resolve(false));
+    probe.listen(p, host, () => probe.close(() => resolve(true)));
+  });
 }
 
 main().catch((err) => {
