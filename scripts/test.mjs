@@ -56,7 +56,7 @@ async function main() {
       if (only.length && !only.includes(suite.name)) continue;
       step(`test suite: ${suite.name}`);
       const out = path.join(resultsDir, `${suite.name}.json`);
-      const r = spawnSync('pnpm', ['--filter', suite.filter, 'exec', 'vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile=${out}`], {
+      const r = spawnSync('pnpm', ['--filter', suite.filter, 'exec', 'vitest', 'run', '--passWithNoTests', '--reporter=default', '--reporter=json', `--outputFile=${out}`], {
         cwd: root,
         stdio: 'inherit',
         env: suite.needsDb ? env : { ...process.env, NODE_ENV: 'test' },
