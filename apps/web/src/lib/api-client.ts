@@ -11,12 +11,15 @@ export class ApiError extends Error {
   readonly status: number;
   readonly code: string;
   readonly fields: Record<string, string>;
+  /** The whole error body, for routes that send more beside the envelope (an upload's per-row report). */
+  readonly body: unknown;
 
-  constructor(init: { status: number; code: string; message: string; fields?: Record<string, string> | undefined }) {
+  constructor(init: { status: number; code: string; message: string; fields?: Record<string, string> | undefined; body?: unknown }) {
     super(init.message);
     this.status = init.status;
     this.code = init.code;
     this.fields = init.fields ?? {};
+    this.body = init.body;
   }
 }
 
@@ -191,6 +194,7 @@ export function createApiClient(options: ApiClientOptions) {
             code: payload.error.code,
             message: payload.error.message,
             fields: stringFields(payload.error.fields),
+            body: payload,
           })
         : new ApiError({ status: response.status, code: `http_${response.status}`, message: fallbackMessage(response.status) });
       if (response.status === 401 && opts.redirectOn401 !== false && !CREDENTIAL_CODES.has(error.code)) {

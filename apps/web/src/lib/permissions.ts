@@ -144,3 +144,32 @@ export function areaInfo(area: Area): AreaInfo {
   if (!info) throw new Error(`Unknown area ${area}`);
   return info;
 }
+
+/** What the signed-in person may do to one revision, from its state and who wrote it (the server checks the same). */
+export interface RevisionPermissions {
+  edit: boolean;
+  submit: boolean;
+  approve: boolean;
+  retire: boolean;
+  /** Why approval is not offered to someone who may otherwise approve (e.g. their own revision). */
+  approveBlockedBy: 'own_revision' | null;
+}
+
+export function revisionPermissions(
+  user: { id: number; role: Role },
+  revision: { status: 'draft' | 'in_review' | 'approved' | 'retired'; author: { id: number } },
+): RevisionPermissions {
+  const writer = can(user.role, 'edit_requirement_sets');
+  const own = revision.author.id === user.id;
+  const mayApprove = can(user.role, 'approve_revision');
+  return {
+    // Approved and retired revisions never change again; drafts are edited by any writer.
+    edit: writer && revision.status === 'draft',
+    // The author submits their own draft; an administrator may do it for them.
+    submit: writer && revision.status === 'draft' && (own || user.role === 'admin'),
+    // Four eyes: never the author.
+    approve: mayApprove && revision.status === 'in_review' && !own,
+    retire: writer && revision.status === 'approved',
+    approveBlockedBy: mayApprove && revision.status === 'in_review' && own ? 'own_revision' : null,
+  };
+}

@@ -10,12 +10,15 @@ export function Dialog({
   title,
   description,
   children,
+  size = 'md',
 }: {
   open: boolean;
   onClose: () => void;
   title: string;
   description?: ReactNode;
   children: ReactNode;
+  /** 'lg' for dialogs that hold a table (e.g. the revision impact before an approval). */
+  size?: 'md' | 'lg';
 }) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
@@ -34,7 +37,7 @@ export function Dialog({
       aria-labelledby={titleId}
       aria-describedby={description ? descriptionId : undefined}
       onClose={onClose}
-      className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded border border-rule-strong bg-paper-raised p-0 text-ink"
+      className={`m-auto ${size === 'lg' ? 'w-[min(60rem,calc(100vw-2rem))]' : 'w-[min(32rem,calc(100vw-2rem))]'} rounded border border-rule-strong bg-paper-raised p-0 text-ink`}
     >
       {open && (
         <div className="p-6">
