@@ -137,6 +137,17 @@ describe('polecourt batch', () => {
     expect(ids[2999]).toBe('n2999');
     expect(r.status).toBe(0);
   });
+
+  it('keeps order and line numbers across the blocks that worker threads assess (a bad line deep in the file)', () => {
+    const lines = Array.from({ length: 4500 }, (_, i) => (i === 2716 ? '{"poles": [' : JSON.stringify({ ...nise, id: `n${i}` })));
+    const r = run(['batch', '--designs', file('blocks.jsonl', lines.join('\n') + '\n')]);
+    const out = r.stdout.trimEnd().split('\n').map((l) => JSON.parse(l));
+    expect(out.length).toBe(4500);
+    expect(out[2716].error.line).toBe(2717);
+    expect(out[2715].id).toBe('n2715');
+    expect(out[4499].id).toBe('n4499');
+    expect(r.status).toBe(1);
+  });
 });
 
 describe('polecourt usage', () => {

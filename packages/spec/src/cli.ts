@@ -4,10 +4,12 @@
 // the output the caller wanted); a usage mistake prints an error object on
 // stdout, the message on stderr, and exits 2.
 import { openSync, readFileSync, createReadStream } from 'node:fs';
+import { availableParallelism } from 'node:os';
 import { StringDecoder } from 'node:string_decoder';
-import { assessModel } from './assess-model.js';
+import { Worker } from 'node:worker_threads';
+
+import { assessJsonBlock, type BlockResult } from './assess-json-block.js';
 import { evaluate } from './evaluate.js';
-import { parseDesign } from './parse-design.js';
 import { parseRequirements, type ResolvedRequirements } from './parse-requirements.js';
 import { regionBounds } from './region-bounds.js';
 import { SpecInputError } from './spec-input-error.js';
@@ -118,9 +120,51 @@ function write(text: string): Promise<void> {
 }
 
 // Streams the designs chunk by chunk (not line by line through readline, whose
-// per-line promises cost more than the assessments): every complete line of a
-// chunk is assessed, and the chunk's output is written before the next read,
-// so memory stays bounded and output order follows input order.
+// per-line promises cost more than the assessments) and cuts them into blocks
+// of lines. Inputs of more than one block are assessed on worker threads, one
+// per core, with a bounded number of blocks in flight; output is written in
+// input order, so memory stays bounded and order follows the input.
+const BLOCK_LINES = 1000;
+
+class BlockPool {
+  private workers: Worker[] = [];
+  private next = 0;
+  private seq = 0;
+  private waiting = new Map<number, (r: BlockResult) => void>();
+
+  constructor(
+    readonly size: number,
+    req: ResolvedRequirements | null,
+  ) {
+    for (let i = 0; i < size; i++) {
+      const w = new Worker(new URL('./batch-worker.js', import.meta.url), { workerData: { req } });
+      w.on('message', (m: BlockResult & { id: number }) => {
+        const done = this.waiting.get(m.id);
+        this.waiting.delete(m.id);
+        done?.(m);
+      });
+      w.on('error', (e) => {
+        for (const done of this.waiting.values()) done({ text: '', allGood: false, internalErrors: [`worker failed: ${e.message}`] });
+        this.waiting.clear();
+      });
+      this.workers.push(w);
+    }
+  }
+
+  run(lines: string[], first: number): Promise<BlockResult> {
+    const id = this.seq++;
+    const w = this.workers[this.next++ % this.workers.length] as Worker;
+    return new Promise((resolve) => {
+      this.waiting.set(id, resolve);
+      w.postMessage({ id, lines, first });
+    });
+  }
+
+  async close(): Promise<void> {
+    await Promise.all(this.workers.map((w) => w.terminate()));
+  }
+}
+
 async function runBatch(file: string, req: ResolvedRequirements | null): Promise<number> {
   let stream: NodeJS.ReadableStream;
   if (file === '-') stream = process.stdin;
@@ -134,43 +178,49 @@ async function runBatch(file: string, req: ResolvedRequirements | null): Promise
     stream = createReadStream('', { fd, highWaterMark: 1 << 20 });
   }
   const decoder = new StringDecoder('utf8');
-  let lineNo = 0;
+  const threads = Math.max(1, Math.min(availableParallelism(), 8));
+  let pool: BlockPool | null = null;
   let allGood = true;
   let rest = '';
-  const assessLine = (raw: string): string => {
-    lineNo++;
-    let line = raw.endsWith('\r') ? raw.slice(0, -1) : raw;
-    if (lineNo === 1 && line.charCodeAt(0) === 0xfeff) line = line.slice(1);
-    try {
-      let design: unknown;
-      try {
-        design = JSON.parse(line);
-      } catch (e) {
-        throw new SpecInputError('invalid_json', `Line ${lineNo} is not valid JSON: ${(e as Error).message}`, '');
-      }
-      const a = assessModel(parseDesign(design), req);
-      if (a.verdict === 'noncompliant') allGood = false;
-      return JSON.stringify(a);
-    } catch (e) {
-      allGood = false;
-      const err = errorObject(e);
-      if (err.code === 'internal_error') process.stderr.write(`polecourt: line ${lineNo}: ${err.message}\n`);
-      return JSON.stringify({ error: { ...err, line: lineNo } });
-    }
+  let block: string[] = [];
+  let nextLine = 1;
+  const inflight: Promise<BlockResult>[] = [];
+
+  const flushOne = async (): Promise<void> => {
+    const r = await (inflight.shift() as Promise<BlockResult>);
+    if (!r.allGood) allGood = false;
+    for (const m of r.internalErrors) process.stderr.write(`polecourt: ${m}\n`);
+    if (r.text) await write(r.text);
   };
-  const assessText = (text: string, final: boolean): string[] => {
+  const dispatch = async (final: boolean): Promise<void> => {
+    const lines = block;
+    const first = nextLine;
+    block = [];
+    nextLine += lines.length;
+    // A single short input stays on this thread: no worker start-up to pay.
+    if (!pool && !final && threads > 1) pool = new BlockPool(threads, req);
+    inflight.push(pool ? pool.run(lines, first) : Promise.resolve(assessJsonBlock(lines, first, req)));
+    if (inflight.length >= 2 * threads) await flushOne();
+  };
+  const take = async (text: string, final: boolean): Promise<void> => {
     const lines = (rest + text).split('\n');
     rest = final ? '' : (lines.pop() as string);
     if (final && lines[lines.length - 1] === '') lines.pop(); // the newline that ends the file
-    return lines.map(assessLine);
+    for (const line of lines) {
+      block.push(line);
+      if (block.length >= BLOCK_LINES) await dispatch(false);
+    }
   };
-  for await (const chunk of stream) {
-    const text = typeof chunk === 'string' ? chunk : decoder.write(chunk as Buffer);
-    const out = assessText(text, false);
-    if (out.length > 0) await write(out.join('\n') + '\n');
+  try {
+    for await (const chunk of stream) {
+      await take(typeof chunk === 'string' ? chunk : decoder.write(chunk as Buffer), false);
+    }
+    await take(decoder.end(), true);
+    if (block.length > 0) await dispatch(true);
+    while (inflight.length > 0) await flushOne();
+  } finally {
+    await (pool as BlockPool | null)?.close();
   }
-  const out = assessText(decoder.end(), true);
-  if (out.length > 0) await write(out.join('\n') + '\n');
   return allGood ? 0 : 1;
 }
 
