@@ -7,6 +7,8 @@ import session from 'express-session';
 import helmet from 'helmet';
 import type { Sequelize } from 'sequelize';
 
+import { apiTokenRoutes } from './components/api-tokens/routes.js';
+import { loadTokenUser } from './components/api-tokens/bearer.js';
 import { assessmentRoutes } from './components/assessments/routes.js';
 import { auditRoutes } from './components/audit/routes.js';
 import { authRoutes } from './components/auth/routes.js';
@@ -22,6 +24,7 @@ import { inviteRoutes, passwordRoutes } from './components/passwords/routes.js';
 import { userRoutes } from './components/users/routes.js';
 import type { Config } from './config.js';
 import { csrfGuard, loadUser } from './lib/auth-middleware.js';
+import { contentTypeGuard } from './lib/content-type-guard.js';
 import { errorMiddleware, notFoundApi } from './lib/error-middleware.js';
 import './lib/request-context.js';
 
@@ -71,6 +74,7 @@ export function buildApp(config: Config, sequelize: Sequelize): BuiltApp {
 
   app.use(
     '/api',
+    contentTypeGuard,
     express.json({ limit: '1mb' }),
     session({
       name: SESSION_COOKIE,
@@ -88,11 +92,20 @@ export function buildApp(config: Config, sequelize: Sequelize): BuiltApp {
         path: '/',
       },
     }),
+    loadTokenUser,
     loadUser,
     csrfGuard,
   );
 
-  app.use('/api/auth', authRoutes(SESSION_COOKIE));
+  app.use(
+    '/api/auth',
+    authRoutes(SESSION_COOKIE, {
+      maxPerAccount: config.LOGIN_MAX_FAILURES,
+      maxPerAddress: config.LOGIN_MAX_FAILURES_PER_ADDRESS,
+      windowMs: config.LOGIN_WINDOW_MINUTES * 60 * 1000,
+    }),
+  );
+  app.use('/api/tokens', apiTokenRoutes());
   app.use('/api/auth', passwordRoutes());
   app.use('/api/users', inviteRoutes());
   app.use('/api/users', userRoutes());

@@ -18,6 +18,11 @@ const envSchema = z.object({
   TRUST_PROXY: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
   WEB_DIST: z.string().optional(),
   LOG_LEVEL: z.enum(['silent', 'error', 'info']).default('info'),
+  // Sign-in throttling: after this many failed sign-ins within the window, for one
+  // account or from one address, sign-in answers 429 until the oldest one ages out.
+  LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).max(10_000).default(10),
+  LOGIN_MAX_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).max(100_000).default(10),
+  LOGIN_WINDOW_MINUTES: z.coerce.number().int().min(1).max(24 * 60).default(15),
   // Mail. With MAIL_FAKE=true the app runs its own SMTP fake on 127.0.0.1:SMTP_PORT
   // (0 = any free port) and sends to it; messages show under Outbox. Set
   // MAIL_FAKE=false and SMTP_HOST etc. to send through a real mail server.

@@ -1,4 +1,5 @@
 import './index.css';
+import './config/zod-jitless';
 
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';

@@ -79,3 +79,12 @@ export interface RequestResetReply {
 export interface SetPasswordReply {
   email: string;
 }
+
+export const changePasswordSchema = z
+  .object({
+    currentPassword: z.string().min(1, 'Enter your current password').max(200, 'Password is too long'),
+    newPassword: passwordSchema,
+  })
+  .strict()
+  .refine((v) => v.currentPassword !== v.newPassword, { path: ['newPassword'], message: 'Choose a password different from the current one' });
+export type ChangePasswordInput = z.infer<typeof changePasswordSchema>;

@@ -5,3 +5,5 @@ export * from './workflow.js';
 export * from './mail.js';
 export * from './common-passwords.js';
 export * from './reports.js';
+export * from './audit.js';
+export * from './api-tokens.js';

@@ -225,8 +225,8 @@ export const regionQuerySchema = z
     reMax: z.coerce.number({ message: 'reMax must be a number' }).finite('reMax must be a number').optional(),
     imMin: z.coerce.number({ message: 'imMin must be a number' }).finite('imMin must be a number').optional(),
     imMax: z.coerce.number({ message: 'imMax must be a number' }).finite('imMax must be a number').optional(),
-  })
-  .strict();
+  });
+// Query schemas leave out .strict(): on every route an unknown query key is ignored (a body key is refused).
 
 export interface Viewport {
   reMin: number;
@@ -261,8 +261,7 @@ export const coverageQuerySchema = z
   .object({
     filter: z.enum(COVERAGE_FILTERS, { message: `filter must be one of ${COVERAGE_FILTERS.join(', ')}` }).default('all'),
     format: z.enum(['json', 'csv'], { message: 'format must be json or csv' }).default('json'),
-  })
-  .strict();
+  }); // not strict: unknown query keys are ignored on every route
 
 export interface CoverageRow {
   candidateId: number;

@@ -4,7 +4,7 @@
 // the zpk and polynomial forms of one model give the same metrics.
 // Overshoot and undershoot (in %) are compared to 1e-9..1e-6 of max(value, 1 %):
 // a 1e-5 % overshoot is a difference of two nearly equal numbers.
-import { describe, expect, it } from 'vitest';
+import { describe, it } from 'vitest';
 import fc from 'fast-check';
 import { computeStepMetrics } from './step-metrics.js';
 import { parseDesign } from './parse-design.js';

@@ -13,6 +13,8 @@ import type { SessionUser } from './request-context.js';
  * deactivated account or a changed role takes effect at once.
  */
 export async function loadUser(req: Request, _res: Response, next: NextFunction): Promise<void> {
+  // Already known from an API token (loadTokenUser runs first): the cookie is not consulted.
+  if (req.apiToken) return next();
   const userId = req.session?.userId;
   if (userId !== undefined) {
     const user = await userRepository.findById(userId);
@@ -41,6 +43,13 @@ export function requireRole(...roles: Role[]) {
   };
 }
 
+/** Routes that manage credentials (API tokens, the password) need a signed-in session, not a token. */
+export function requireSession(req: Request, _res: Response, next: NextFunction): void {
+  if (!req.user) throw AppError.unauthorized();
+  if (req.apiToken) throw new AppError('session_required', 'Sign in with your password to manage tokens or your password; an API token cannot do this.', 403);
+  next();
+}
+
 export function currentUser(req: Request): SessionUser {
   if (!req.user) throw AppError.unauthorized();
   return req.user;
@@ -54,6 +63,8 @@ const CSRF_EXEMPT = new Set(['/api/auth/login', '/api/auth/set-password', '/api/
 
 /** Every state-changing request of a signed-in session must echo its CSRF token. */
 export function csrfGuard(req: Request, _res: Response, next: NextFunction): void {
+  // A bearer token is never sent by a browser on its own (unlike a cookie), so it needs no CSRF echo.
+  if (req.apiToken) return next();
   // Mounted under /api, where req.path is relative to the mount: compare the full path.
   if (SAFE_METHODS.has(req.method) || CSRF_EXEMPT.has(req.baseUrl + req.path)) return next();
   const expected = req.session?.csrfToken;

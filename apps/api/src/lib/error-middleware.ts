@@ -29,6 +29,12 @@ function triggerRefusal(err: unknown): AppError | null {
   return AppError.conflict(code, message);
 }
 
+// The multipart parser (busboy, under multer) throws plain Errors for a body it cannot read.
+const BROKEN_MULTIPART = /^(Multipart: Boundary not found|Unexpected end of (form|file)|Malformed (part header|content type)|Missing Content-Type|Unsupported content type|Not ready to parse)/;
+function isBrokenMultipart(err: unknown): boolean {
+  return err instanceof Error && !(err instanceof BaseError) && BROKEN_MULTIPART.test(err.message);
+}
+
 /** Turns anything thrown into an AppError with a contract status. */
 export function normalizeError(err: unknown): AppError {
   if (err instanceof AppError) return err;
@@ -48,6 +54,7 @@ export function normalizeError(err: unknown): AppError {
     return new AppError('unsupported_encoding', 'The request body encoding is not supported.', 415);
   }
   if (e?.code === 'LIMIT_FILE_SIZE') return new AppError('too_large', 'The uploaded file is too large.', 413);
+  if (isBrokenMultipart(err)) return AppError.badRequest('invalid_upload', 'The upload is not a readable multipart/form-data body (cut off, or without its boundary). Send the file again.', { file: 'unreadable upload' });
   if (typeof e?.code === 'string' && e.code.startsWith('LIMIT_')) {
     return AppError.badRequest('invalid_upload', `The upload was refused (${e.code.toLowerCase().replace(/_/g, ' ')}).`, e.field ? { [e.field]: 'refused' } : undefined);
   }

@@ -15,8 +15,12 @@ export function parsePage(query: unknown): { limit: number; offset: number } {
 
 const idSchema = z.coerce.number().int().positive().max(2 ** 31);
 
+// Decimal digits only: Number() would also read '1e3', '0x1F', ' 7' or '+7' as ids.
+const ID_TEXT = /^[1-9][0-9]{0,9}$/;
+
 /** A path id that is not a positive integer names nothing: 404, not 500. */
 export function parseId(raw: unknown, what: string): number {
+  if (typeof raw === 'string' && !ID_TEXT.test(raw)) throw AppError.notFound(what);
   const parsed = idSchema.safeParse(raw);
   if (!parsed.success) throw AppError.notFound(what);
   return parsed.data;

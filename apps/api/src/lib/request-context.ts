@@ -19,6 +19,8 @@ declare global {
   namespace Express {
     interface Request {
       user?: SessionUser;
+      /** Set when the request authenticated with a personal API token (Authorization: Bearer). */
+      apiToken?: { id: number };
     }
   }
 }

@@ -70,6 +70,7 @@ export function createAppRouter(queryClient: QueryClient) {
                 { path: 'audit-trail', lazy: lazy(() => import('./routes/app/audit-trail')) },
                 { path: 'users', lazy: lazy(() => import('./routes/app/users')) },
                 { path: 'outbox', lazy: lazy(() => import('./routes/app/outbox')) },
+                { path: 'settings/tokens', lazy: lazy(() => import('./routes/app/settings-tokens')) },
               ],
             },
           ],

@@ -7,15 +7,19 @@ import { AREAS, type Action, type Area, accessTo, areaInfo, can, canView, canWri
 // admin may do everything; systems engineers own product lines and requirement sets; controls
 // engineers own candidates, assessments and reports and read product lines; auditors read everything.
 const expectedNav: Record<Role, string[]> = {
-  admin: ['Overview', 'Product lines', 'Candidates', 'Reports', 'Verify a report', 'Audit trail', 'Users', 'Outbox'],
-  systems_engineer: ['Overview', 'Product lines', 'Verify a report'],
-  controls_engineer: ['Overview', 'Product lines', 'Candidates', 'Reports', 'Verify a report'],
-  auditor: ['Overview', 'Product lines', 'Candidates', 'Reports', 'Verify a report', 'Audit trail'],
+  admin: ['Overview', 'Product lines', 'Candidates', 'Reports', 'Verify a report', 'Audit trail', 'Users', 'Outbox', 'Settings'],
+  systems_engineer: ['Overview', 'Product lines', 'Verify a report', 'Settings'],
+  controls_engineer: ['Overview', 'Product lines', 'Candidates', 'Reports', 'Verify a report', 'Settings'],
+  auditor: ['Overview', 'Product lines', 'Candidates', 'Reports', 'Verify a report', 'Audit trail', 'Settings'],
 };
 
 describe('navItemsFor(role)', () => {
   it.each(ROLES.map((role) => [role, expectedNav[role]] as const))('navItemsFor(%s) lists exactly %j', (role, labels) => {
     expect(navItemsFor(role).map((item) => item.label)).toEqual(labels);
+  });
+
+  it('shows Settings (own API tokens and password) to every role', () => {
+    for (const role of ROLES) expect(navItemsFor(role).map((item) => item.path)).toContain('/settings/tokens');
   });
 
   it('shows Users to the admin only', () => {
@@ -25,7 +29,8 @@ describe('navItemsFor(role)', () => {
 
 describe('access levels', () => {
   it('gives the auditor read access and never write access', () => {
-    for (const { area } of AREAS) expect(canWrite('auditor', area)).toBe(false);
+    // Settings is the auditor's own account (API tokens that can only read, the password), not the product's records.
+    for (const { area } of AREAS) if (area !== 'settings') expect(canWrite('auditor', area)).toBe(false);
     expect(AREAS.filter(({ area }) => canView('auditor', area)).map((a) => a.area)).toEqual([
       'overview',
       'product_lines',
@@ -33,6 +38,7 @@ describe('access levels', () => {
       'reports',
       'verify_report',
       'audit_trail',
+      'settings',
     ]);
   });
 

@@ -3,7 +3,7 @@
 // this only keeps screens from offering what the signed-in person's role may not use.
 import type { Role } from '@polecourt/contracts';
 
-export type Area = 'overview' | 'product_lines' | 'candidates' | 'reports' | 'verify_report' | 'audit_trail' | 'users' | 'outbox';
+export type Area = 'overview' | 'product_lines' | 'candidates' | 'reports' | 'verify_report' | 'audit_trail' | 'users' | 'outbox' | 'settings';
 
 /** none: not shown; read: shown, nothing can be changed; write: shown with its editing controls. */
 export type Access = 'none' | 'read' | 'write';
@@ -50,6 +50,7 @@ export const AREAS: readonly AreaInfo[] = [
   },
   { area: 'users', path: '/users', label: 'Users', summary: 'Accounts, roles and who may sign in.' },
   { area: 'outbox', path: '/outbox', label: 'Outbox', summary: 'E-mail Polecourt has sent through its local mail service.' },
+  { area: 'settings', path: '/settings/tokens', label: 'Settings', summary: 'Your API tokens for pipelines, and your password.' },
 ];
 
 const ACCESS: Record<Role, Record<Area, Access>> = {
@@ -62,6 +63,7 @@ const ACCESS: Record<Role, Record<Area, Access>> = {
     audit_trail: 'read', // the trail is written by the server only, never by a person
     users: 'write',
     outbox: 'read', // messages are read, never written, here
+    settings: 'write', // everyone manages their own tokens and password
   },
   systems_engineer: {
     overview: 'read',
@@ -72,6 +74,7 @@ const ACCESS: Record<Role, Record<Area, Access>> = {
     audit_trail: 'none',
     users: 'none',
     outbox: 'none',
+    settings: 'write', // everyone manages their own tokens and password
   },
   controls_engineer: {
     overview: 'read',
@@ -82,6 +85,7 @@ const ACCESS: Record<Role, Record<Area, Access>> = {
     audit_trail: 'none',
     users: 'none',
     outbox: 'none',
+    settings: 'write', // everyone manages their own tokens and password
   },
   auditor: {
     overview: 'read',
@@ -92,6 +96,7 @@ const ACCESS: Record<Role, Record<Area, Access>> = {
     audit_trail: 'read',
     users: 'none',
     outbox: 'none',
+    settings: 'write', // everyone manages their own tokens and password
   },
 };
 

@@ -13,6 +13,7 @@ import { candidateRepository, type CandidateRecord } from '../candidates/reposit
 import { requirementSetRepository } from '../requirement-sets/repository.js';
 import { revisionRepository, type RevisionRecord } from '../revisions/repository.js';
 import { RevisionModel } from '../revisions/model.js';
+import { noticeAssessmentNotCompliant } from '../workflow-notices/notices.js';
 import { assessmentRepository, type AssessmentRecord } from './repository.js';
 
 async function toStored(records: AssessmentRecord[], t?: Transaction): Promise<StoredAssessment[]> {
@@ -102,6 +103,9 @@ export async function createAssessment(actor: SessionUser, candidateId: number, 
       productLineId: candidate.productLineId,
       after: { id: newId, ...stored },
     });
+    if (stored.verdict === 'noncompliant') {
+      await noticeAssessmentNotCompliant(t, { assessmentId: newId, candidate, revision, result });
+    }
     return newId;
   });
   return getAssessment(id);

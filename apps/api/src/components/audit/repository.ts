@@ -1,6 +1,7 @@
-import { Op, type Transaction, type WhereOptions } from 'sequelize';
+import { Op, QueryTypes, type Transaction, type WhereOptions } from 'sequelize';
 
 import { canonicalJson } from '../../lib/canonical-json.js';
+import { getSequelize } from '../../lib/transaction.js';
 import { chainHash } from './chain-hash.js';
 import { AuditEventModel, AuditHeadModel } from './model.js';
 
@@ -37,6 +38,28 @@ export interface AuditFilter {
   entityId?: string | undefined;
   from?: Date | undefined;
   to?: Date | undefined;
+}
+
+/** An event as stored: before and after kept as the exact canonical JSON that was hashed. */
+export interface StoredAuditEvent {
+  id: number;
+  occurredAt: string;
+  actorId: number | null;
+  actorEmail: string | null;
+  action: string;
+  entityType: string;
+  entityId: string | null;
+  productLineId: number | null;
+  beforeJson: string | null;
+  afterJson: string | null;
+  hash: string;
+}
+
+export interface AuditFacetIds {
+  actions: string[];
+  entityTypes: string[];
+  actors: { id: number; email: string }[];
+  productLineIds: number[];
 }
 
 function toRecord(row: AuditEventModel): AuditEventRecord {
@@ -106,6 +129,74 @@ export const auditRepository = {
       offset,
     });
     return { items: rows.map(toRecord), total: count };
+  },
+
+  /**
+   * The filtered events, newest first, in batches read by keyset (id below the
+   * last one seen) rather than by offset, so an export of many events never
+   * re-reads or skips rows. Events appended meanwhile have higher ids and are
+   * left out: the export is the trail as it stood when it began.
+   */
+  async *scan(filter: AuditFilter, batchSize = 500): AsyncGenerator<StoredAuditEvent[]> {
+    const base = whereOf(filter) as Record<string | symbol, unknown>;
+    let below: number | null = null;
+    for (;;) {
+      const rows: AuditEventModel[] = await AuditEventModel.findAll({
+        where: (below === null ? base : { ...base, id: { [Op.lt]: below } }) as WhereOptions,
+        order: [['id', 'DESC']],
+        limit: batchSize,
+        raw: true,
+      });
+      if (rows.length === 0) return;
+      yield rows.map((e) => ({
+        id: Number(e.id),
+        occurredAt: new Date(e.occurredAt).toISOString(),
+        actorId: e.actorId,
+        actorEmail: e.actorEmail,
+        action: e.action,
+        entityType: e.entityType,
+        entityId: e.entityId,
+        productLineId: e.productLineId,
+        beforeJson: e.beforeJson,
+        afterJson: e.afterJson,
+        hash: e.hash,
+      }));
+      if (rows.length < batchSize) return;
+      below = Number(rows[rows.length - 1]!.id);
+    }
+  },
+
+  /** The distinct values the trail holds, for filter choices (each column is indexed, so these stay cheap). */
+  async facets(): Promise<AuditFacetIds> {
+    const sequelize = getSequelize();
+    const [actions, entityTypes, actors, lines] = await Promise.all([
+      sequelize.query<{ v: string }>('SELECT DISTINCT action AS v FROM audit_events ORDER BY v', { type: QueryTypes.SELECT }),
+      sequelize.query<{ v: string }>('SELECT DISTINCT entity_type AS v FROM audit_events ORDER BY v', { type: QueryTypes.SELECT }),
+      sequelize.query<{ id: number; email: string | null }>(
+        'SELECT actor_id AS id, MAX(actor_email) AS email FROM audit_events WHERE actor_id IS NOT NULL GROUP BY actor_id',
+        { type: QueryTypes.SELECT },
+      ),
+      sequelize.query<{ id: number }>('SELECT DISTINCT product_line_id AS id FROM audit_events WHERE product_line_id IS NOT NULL', {
+        type: QueryTypes.SELECT,
+      }),
+    ]);
+    return {
+      actions: actions.map((r) => r.v),
+      entityTypes: entityTypes.map((r) => r.v),
+      actors: actors.map((r) => ({ id: Number(r.id), email: r.email ?? '' })),
+      productLineIds: lines.map((r) => Number(r.id)),
+    };
+  },
+
+  /** Current names of the given product lines, for display beside the ids the trail keeps. */
+  async productLineNames(ids: number[]): Promise<Map<number, string>> {
+    const wanted = [...new Set(ids)];
+    if (wanted.length === 0) return new Map();
+    const rows = await getSequelize().query<{ id: number; name: string }>('SELECT id, name FROM product_lines WHERE id IN (:ids)', {
+      replacements: { ids: wanted },
+      type: QueryTypes.SELECT,
+    });
+    return new Map(rows.map((r) => [Number(r.id), r.name]));
   },
 
   async head(): Promise<{ lastId: number | null; lastHash: string }> {

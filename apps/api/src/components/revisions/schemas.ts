@@ -13,5 +13,5 @@ export const patchRevisionSchema = revisionPatchBaseSchema
   .refine((v) => v.requirements !== undefined || v.rationale !== undefined, { message: 'Nothing to change: send requirements or rationale' });
 
 export const diffQuerySchema = z
-  .object({ against: z.coerce.number({ message: 'against must be a revision id' }).int('against must be a revision id').positive('against must be a revision id').optional() })
-  .strict();
+  // Not strict: unknown query keys are ignored on every route.
+  .object({ against: z.coerce.number({ message: 'against must be a revision id' }).int('against must be a revision id').positive('against must be a revision id').optional() });

@@ -10,6 +10,7 @@ import { inTransaction } from '../../lib/transaction.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { requirementSetRepository, type RequirementSetRecord } from '../requirement-sets/repository.js';
 import { userRepository } from '../users/repository.js';
+import { noticeRevisionApproved, noticeRevisionSubmitted } from '../workflow-notices/notices.js';
 import { diffRequirements } from './diff.js';
 import { acknowledgement, computeImpact } from './impact.js';
 import { defaultViewport, mergeViewport } from './region-viewport.js';
@@ -141,6 +142,7 @@ export async function submitRevision(actor: SessionUser, id: number): Promise<Re
     assertAuthorOrAdmin(actor, before);
     const after = await revisionRepository.update(id, { status: 'in_review', submittedAt: new Date(), version: before.version + 1 }, t);
     await recordAudit(t, actor, { action: 'revision.submit', entityType: 'revision', entityId: id, productLineId: await productLineOf(before, t), before, after });
+    await noticeRevisionSubmitted(t, actor, after);
     return toRevision(after, t);
   });
 }
@@ -184,6 +186,8 @@ export async function approveRevision(actor: SessionUser, id: number, input: { p
       t,
     );
     await recordAudit(t, actor, { action: 'revision.approve', entityType: 'revision', entityId: id, productLineId: set.productLineId, before, after });
+    // Told from the same impact the approver acknowledged.
+    await noticeRevisionApproved(t, actor, after, impact);
     return toRevision(after, t);
   });
 }

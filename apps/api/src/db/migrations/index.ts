@@ -10,6 +10,9 @@ import * as m0007 from './0007-candidates-and-assessments.js';
 import * as m0050 from './0050-mail.js';
 import * as m0051 from './0051-password-tokens.js';
 import * as m0100 from './0100-reports.js';
+import * as m0150 from './0150-login-failures.js';
+import * as m0151 from './0151-api-tokens.js';
+import * as m0200 from './0200-audit-action-index.js';
 
 export const migrations = [
   { name: '0001-users', ...m0001 },
@@ -22,4 +25,7 @@ export const migrations = [
   { name: '0050-mail', ...m0050 },
   { name: '0051-password-tokens', ...m0051 },
   { name: '0100-reports', ...m0100 },
+  { name: '0150-login-failures', ...m0150 },
+  { name: '0151-api-tokens', ...m0151 },
+  { name: '0200-audit-action-index', ...m0200 },
 ];

@@ -1,0 +1,159 @@
+// Load figures for two hot routes, over loopback, bounded in time: prints
+// requests/s, p50, p99 and errors, and the machine's load average; asserts
+// nothing. The API runs as a child process (node --import tsx src/main.ts) so
+// the load generator (autocannon) does not share its event loop.
+//
+//   pnpm --filter @polecourt/api bench:load [--seconds 20] [--connections 100] [--auth session|token]
+//
+// Without DB_* in the environment it uses the test instance that `npm test`
+// prepares (.data/test, 127.0.0.1:3408, database polecourt_test): run it with
+// that instance up (POLECOURT_KEEP_TEST_DB=1 npm test -- api, or any run in progress).
+import { spawn, type ChildProcess } from 'node:child_process';
+import { existsSync, readFileSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { parseArgs } from 'node:util';
+
+import autocannon from 'autocannon';
+
+import { evaluate, regionBounds, regionPolygons } from '@polecourt/spec';
+
+const { values: args } = parseArgs({
+  options: { seconds: { type: 'string', default: '20' }, connections: { type: 'string', default: '100' }, auth: { type: 'string', default: 'session' } },
+});
+const SECONDS = Number(args.seconds);
+const CONNECTIONS = Number(args.connections);
+const AUTH = args.auth === 'token' ? 'token' : 'session';
+const API_DIR = path.resolve(import.meta.dirname, '..');
+const ROOT = path.resolve(API_DIR, '../..');
+
+function apiEnv(): NodeJS.ProcessEnv {
+  if (process.env.DB_PASSWORD) return process.env;
+  const secretsFile = path.join(ROOT, '.data/test/secrets.json');
+  if (!existsSync(secretsFile)) throw new Error('No DB_* settings and no .data/test/secrets.json: run `npm test` once (POLECOURT_KEEP_TEST_DB=1 keeps its database up).');
+  const s = JSON.parse(readFileSync(secretsFile, 'utf8')) as { dbPassword: string; sessionSecret: string };
+  return { ...process.env, DB_PORT: '3408', DB_NAME: 'polecourt_test', DB_PASSWORD: s.dbPassword, SESSION_SECRET: s.sessionSecret, POLECOURT_ROOT: ROOT, POLECOURT_DATA_DIR: path.join(ROOT, '.data/test') };
+}
+
+function startApi(): Promise<{ child: ChildProcess; url: string }> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, ['--import', 'tsx', 'src/main.ts'], {
+      cwd: API_DIR,
+      env: { ...apiEnv(), PORT: '0', SMTP_PORT: '0', S3_PORT: '0', LOG_LEVEL: 'info', NODE_ENV: 'development', MAIL_POLL_MS: '600000' },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    let out = '';
+    const onData = (d: Buffer) => {
+      out += d.toString();
+      const m = /serving on (http:\/\/\S+)/.exec(out);
+      if (m) resolve({ child, url: m[1]! });
+    };
+    child.stdout!.on('data', onData);
+    child.stderr!.on('data', (d: Buffer) => (out += d.toString()));
+    child.once('exit', (code) => reject(new Error(`the API exited (${code}) before serving:\n${out}`)));
+  });
+}
+
+interface Session {
+  cookie: string;
+  csrf: string;
+}
+
+async function call(base: string, s: Session | null, method: string, p: string, body?: unknown): Promise<{ status: number; body: any; cookie?: string }> {
+  const headers: Record<string, string> = { accept: 'application/json' };
+  if (s?.cookie) headers.cookie = s.cookie;
+  if (s?.csrf && method !== 'GET') headers['x-csrf-token'] = s.csrf;
+  if (body !== undefined) headers['content-type'] = 'application/json';
+  const res = await fetch(base + p, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) });
+  const set = res.headers.getSetCookie()[0];
+  return { status: res.status, body: await res.json().catch(() => null), ...(set ? { cookie: set.split(';')[0]! } : {}) };
+}
+
+async function signIn(base: string, email: string): Promise<Session> {
+  const r = await call(base, null, 'POST', '/api/auth/login', { email, password: 'polecourt-demo' });
+  if (r.status !== 200 || !r.cookie) throw new Error(`sign-in as ${email} failed: ${r.status} ${JSON.stringify(r.body)}`);
+  return { cookie: r.cookie, csrf: r.body.csrfToken };
+}
+
+async function must(r: Promise<{ status: number; body: any }>, want: number, what: string): Promise<any> {
+  const got = await r;
+  if (got.status !== want) throw new Error(`${what}: ${got.status} ${JSON.stringify(got.body).slice(0, 300)}`);
+  return got.body;
+}
+
+const DESIGN = { poles: [{ re: -3, im: 4 }, { re: -3, im: -4 }, { re: -40, im: 0 }], zeros: [], gain: 1000 };
+const LIMITS = { maxOvershootPct: 10, maxSettlingTime: 2 };
+
+/** How long the engine work behind each route takes on its own, on this process's thread. */
+function engineCost(): { evaluateMs: number; regionMs: number } {
+  const time = (f: () => void, n: number) => {
+    for (let i = 0; i < 50; i++) f();
+    const t = process.hrtime.bigint();
+    for (let i = 0; i < n; i++) f();
+    return Number(process.hrtime.bigint() - t) / 1e6 / n;
+  };
+  return {
+    evaluateMs: time(() => evaluate(DESIGN, LIMITS), 2000),
+    regionMs: time(() => regionPolygons(regionBounds(LIMITS as never), { reMin: -20, reMax: 2, imMin: -12, imMax: 12 }), 2000),
+  };
+}
+
+function run(opts: autocannon.Options): Promise<autocannon.Result> {
+  return new Promise((resolve, reject) => {
+    autocannon(opts, (err, result) => (err ? reject(err) : resolve(result)));
+  });
+}
+
+function report(name: string, r: autocannon.Result): void {
+  const errors = r.errors + r.timeouts + r.non2xx;
+  console.log(
+    `${name}: ${r.requests.average.toFixed(0)} requests/s (total ${r.requests.total}), latency p50 ${r.latency.p50} ms, p99 ${r.latency.p99} ms, max ${r.latency.max} ms; ` +
+      `errors ${errors} (non-2xx ${r.non2xx}, socket errors ${r.errors}, timeouts ${r.timeouts})`,
+  );
+}
+
+const load = () => os.loadavg().map((v) => v.toFixed(2)).join(' ');
+
+async function main(): Promise<void> {
+  console.log(`load bench: ${CONNECTIONS} connections, ${SECONDS} s per route, auth by ${AUTH}, ${os.cpus().length} cores, load average before: ${load()}`);
+  const cost = engineCost();
+  console.log(`engine alone on one thread: evaluate ${cost.evaluateMs.toFixed(3)} ms per call, region polygons ${cost.regionMs.toFixed(3)} ms per call`);
+  const { child, url } = await startApi();
+  try {
+    const systems = await signIn(url, 'systems@example.com');
+    const admin = await signIn(url, 'admin@example.com');
+    const controls = await signIn(url, 'controls@example.com');
+    const line = await must(call(url, systems, 'POST', '/api/product-lines', { name: `Load bench ${Date.now().toString(36)}`, description: 'bench/load.ts' }), 201, 'product line');
+    const set = await must(call(url, systems, 'POST', `/api/product-lines/${line.id}/requirement-sets`, { name: 'Load', purpose: '' }), 201, 'requirement set');
+    const rev = await must(call(url, systems, 'POST', `/api/requirement-sets/${set.id}/revisions`, { requirements: LIMITS, rationale: 'load bench' }), 201, 'revision');
+    await must(call(url, systems, 'POST', `/api/revisions/${rev.id}/submit`), 200, 'submit');
+    await must(call(url, admin, 'POST', `/api/revisions/${rev.id}/approve`, { password: 'polecourt-demo', impactAcknowledged: true }), 200, 'approve');
+    const candidate = await must(call(url, controls, 'POST', `/api/product-lines/${line.id}/candidates`, { name: 'Load candidate', notes: '', design: DESIGN }), 201, 'candidate');
+
+    let headers: Record<string, string>;
+    if (AUTH === 'token') {
+      const t = await must(call(url, controls, 'POST', '/api/tokens', { name: 'load bench', expiresInDays: 1 }), 201, 'token');
+      headers = { authorization: `Bearer ${t.secret}` };
+    } else {
+      headers = { cookie: controls.cookie, 'x-csrf-token': controls.csrf };
+    }
+
+    const region = await run({ url: `${url}/api/revisions/${rev.id}/region`, connections: CONNECTIONS, duration: SECONDS, headers });
+    report(`GET /api/revisions/:id/region`, region);
+    const assess = await run({
+      url: `${url}/api/candidates/${candidate.id}/assessments`,
+      method: 'POST',
+      connections: CONNECTIONS,
+      duration: SECONDS,
+      headers: { ...headers, 'content-type': 'application/json' },
+      body: JSON.stringify({ revisionId: rev.id }),
+    });
+    report(`POST /api/candidates/:id/assessments`, assess);
+    console.log(`targets: region p99 < 50 ms (${region.latency.p99 < 50 ? 'met' : 'NOT met'}), assessments p99 < 100 ms (${assess.latency.p99 < 100 ? 'met' : 'NOT met'}), zero errors (${region.errors + region.non2xx + region.timeouts + assess.errors + assess.non2xx + assess.timeouts === 0 ? 'met' : 'NOT met'})`);
+    console.log(`load average after: ${load()} (the machine is shared: other work shows in these figures)`);
+  } finally {
+    child.kill('SIGTERM');
+  }
+}
+
+await main();
