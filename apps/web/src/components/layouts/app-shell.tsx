@@ -53,7 +53,8 @@ export function AppShell({
               <li key={item.area}>
                 <NavLink
                   to={item.path}
-                  end={item.path === '/'}
+                  // Exact match where another item lives below this one (Reports vs Verify a report).
+                  end={item.path === '/' || items.some((other) => other !== item && other.path.startsWith(`${item.path}/`))}
                   className={({ isActive }) =>
                     cx(
                       'inline-block border-b-2 px-3 pt-3 pb-2 text-sm',
