@@ -23,7 +23,15 @@ async function main() {
   await startMariadb(inst);
   ensureDatabase(inst, { database: 'polecourt', user: 'polecourt', password: secret.dbPassword });
 
-  const env = apiEnv(root, inst, secret, { NODE_ENV: 'production', PORT: String(port), HOST: process.env.HOST ?? '127.0.0.1' });
+  // The local fakes for mail and the report archive start with the app unless the
+  // environment points Polecourt at real services.
+  const env = apiEnv(root, inst, secret, {
+    NODE_ENV: 'production',
+    PORT: String(port),
+    HOST: process.env.HOST ?? '127.0.0.1',
+    MAIL_FAKE: process.env.MAIL_FAKE ?? 'true',
+    S3_FAKE: process.env.S3_FAKE ?? 'true',
+  });
   const api = path.join(root, 'apps/api');
   step('migrating the database');
   run(tsxBin(root), ['src/db/migrate-cli.ts', 'up'], { cwd: api, env });
