@@ -14,6 +14,18 @@ describe('splaneGeometry(input)', () => {
     expect(g.hiddenPoles).toBe(0);
   });
 
+  it('gives the marks as pixel centres instead of paths when asked (for a canvas)', () => {
+    const poles = [...grid(300), { re: -500, im: 0 }];
+    const g = splaneGeometry({ width: 800, height: 500, view, region: null, poles, zeros: [{ re: -2, im: 1 }], dominantPoles: [], dominanceRatio: null, markSize: 3, asPoints: true });
+    expect(g.polePath).toBe('');
+    expect(g.polePoints.length).toBe(600);
+    expect(g.zeroPoints.length).toBe(2);
+    expect(g.markCount).toBe(301);
+    expect(g.hiddenPoles).toBe(1);
+    const p = g.toPixel(poles[7]!);
+    expect([g.polePoints[14], g.polePoints[15]]).toEqual([p.x, p.y]);
+  });
+
   it('counts the poles outside the view instead of drawing them', () => {
     const poles = [...grid(300), { re: -500, im: 0 }];
     const g = splaneGeometry({ width: 800, height: 500, view, region: null, poles, zeros: [], dominantPoles: [], dominanceRatio: null, markSize: 3 });

@@ -31,6 +31,8 @@ export interface SplaneGeometryInput {
   dominantPoles: readonly Complex[];
   dominanceRatio: number | null;
   markSize: number;
+  /** Give the marks as pixel centres (polePoints, zeroPoints) instead of paths, for a canvas. */
+  asPoints?: boolean;
 }
 
 export interface SplaneGeometry {
@@ -40,6 +42,9 @@ export interface SplaneGeometry {
   /** How many marks the pole and zero paths hold. */
   markCount: number;
   zeroPath: string;
+  /** With asPoints: the centres of the marks inside the view, as x, y pairs in CSS pixels (the paths are then empty). */
+  polePoints: Float64Array;
+  zeroPoints: Float64Array;
   ringPath: string;
   /** Roots outside the view that have no edge mark of their own (only counted, for large sets). */
   hiddenPoles: number;
@@ -73,23 +78,30 @@ export function splaneGeometry(input: SplaneGeometryInput): SplaneGeometry {
   const y = scaleLinear().domain([view.imMin, view.imMax]).range([frame.y + frame.height, frame.y]);
 
   // One string per kind of mark: the browser parses one long path far faster than it lays out 10,000 elements.
-  const poleParts: string[] = [];
-  let hiddenPoles = 0;
-  for (const p of poles) {
-    if (inView(p, view)) poleParts.push(crossPath(x(p.re), y(p.im), markSize));
-    else hiddenPoles++;
-  }
-  const zeroParts: string[] = [];
-  let hiddenZeros = 0;
-  for (const z of zeros) {
-    if (inView(z, view)) zeroParts.push(circlePath(x(z.re), y(z.im), markSize));
-    else hiddenZeros++;
-  }
+  // For a canvas only the centres are needed, which skips building the strings altogether.
+  const points = input.asPoints === true;
+  const marks = (roots: readonly Complex[], path: (px: number, py: number, r: number) => string) => {
+    const parts: string[] = [];
+    const centres: number[] = [];
+    let hidden = 0;
+    for (const c of roots) {
+      if (!inView(c, view)) hidden++;
+      else if (points) centres.push(x(c.re), y(c.im));
+      else parts.push(path(x(c.re), y(c.im), markSize));
+    }
+    return { path: parts.join(''), points: Float64Array.from(centres), count: points ? centres.length / 2 : parts.length, hidden };
+  };
+  const poleMarks = marks(poles, crossPath);
+  const zeroMarks = marks(zeros, circlePath);
+  const hiddenPoles = poleMarks.hidden;
+  const hiddenZeros = zeroMarks.hidden;
   return {
     plot,
-    polePath: poleParts.join(''),
-    markCount: poleParts.length + zeroParts.length,
-    zeroPath: zeroParts.join(''),
+    polePath: poleMarks.path,
+    markCount: poleMarks.count + zeroMarks.count,
+    zeroPath: zeroMarks.path,
+    polePoints: poleMarks.points,
+    zeroPoints: zeroMarks.points,
     ringPath: plot.dominantRings.map((r) => r.d).join(''),
     // With full detail every outside root already has its edge mark.
     hiddenPoles: full ? 0 : hiddenPoles,

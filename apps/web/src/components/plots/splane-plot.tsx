@@ -13,6 +13,7 @@ import { Button } from '@/components/ui/button';
 import { formatComplex, formatNumber, formatQuantity } from '@/lib/format';
 import { REQUIREMENT_FIELD_INFO } from '@/lib/requirement-fields';
 
+import { drawCrosses, drawRings } from './draw-marks';
 import { type SplaneGeometry, defaultView, nearestRoot, panView, splaneGeometry, viewCentre, zoomView } from './splane-geometry';
 
 export interface SplanePlotProps {
@@ -128,14 +129,15 @@ function SplanePlotInner({
   }, [bounds, givenRegion, view]);
 
   const markSize = poles.length > 2000 ? 3 : 5;
-  // With thousands of marks a redraw costs a few hundred milliseconds in a software-rendered
+  // With thousands of marks the pole and zero marks go on a canvas between two SVG layers (the
+  // browser's path rasteriser was most of a redraw), and a redraw costs a few hundred milliseconds in a software-rendered
   // browser, so a drag or a wheel gesture moves the drawn picture (a compositor transform) and
   // the plot is redrawn once, when the gesture ends.
   const heavy = poles.length + zeros.length > HEAVY_MARKS;
   const pictureRef = useRef<HTMLDivElement>(null);
   const geometry = useMemo(
-    () => splaneGeometry({ width, height, view, region, poles, zeros, dominantPoles, dominanceRatio: ratio, markSize }),
-    [width, height, view, region, poles, zeros, dominantPoles, ratio, markSize],
+    () => splaneGeometry({ width, height, view, region, poles, zeros, dominantPoles, dominanceRatio: ratio, markSize, asPoints: heavy }),
+    [width, height, view, region, poles, zeros, dominantPoles, ratio, markSize, heavy],
   );
 
   useLayoutEffect(() => {
@@ -310,55 +312,47 @@ function SplanePlotInner({
         onPointerLeave={() => setHovered(null)}
         onKeyDown={onKeyDown}
       >
-        <div ref={pictureRef} className="will-change-transform">
-        <svg width={plot.width} height={plot.height} viewBox={`0 0 ${plot.width} ${plot.height}`} aria-hidden="true" className="block max-w-full">
-          <defs>
-            <clipPath id={clipId}>
-              <path d={plot.framePath} />
-            </clipPath>
-          </defs>
-          <PlotBackdrop geometry={geometry} />
-          <g clipPath={`url(#${clipId})`}>
-            {plot.regionPaths.map((d, i) => (
-              <path key={i} data-testid="splane-region" d={d} fill="var(--color-accent)" fillOpacity={0.16} stroke="var(--color-accent)" strokeWidth={1.75} strokeLinejoin="round" />
-            ))}
-            {plot.boundaryPaths.map((b) => (
-              <path
-                key={b.key}
-                d={b.d}
-                fill="none"
-                stroke={b.binding ? 'var(--color-accent-strong)' : 'var(--color-ink-faint)'}
-                strokeWidth={1}
-                strokeDasharray={b.binding ? undefined : '2 3'}
-                opacity={0.8}
-              />
-            ))}
-            {plot.dominanceLine && (
-              <path d={plot.dominanceLine.d} fill="none" stroke="var(--color-ink-muted)" strokeWidth={1.25} strokeDasharray="6 4" />
-            )}
-            {shownPixel && <circle cx={shownPixel.x} cy={shownPixel.y} r={markSize * 2.6} fill="none" stroke="var(--color-caution)" strokeWidth={2} />}
-          </g>
-          {/* Outside the clip group: clipping 20,000 strokes costs far more than drawing them; every mark drawn is inside the view already. */}
-          <Marks geometry={geometry} />
-          {plot.offPlot.map((m, i) => (
-            <g key={i}>
-              <path d={m.d} fill="var(--color-ink-muted)" />
+        <div ref={pictureRef} className="relative will-change-transform">
+          <svg width={plot.width} height={plot.height} viewBox={`0 0 ${plot.width} ${plot.height}`} aria-hidden="true" className="block max-w-full">
+            <defs>
+              <clipPath id={clipId}>
+                <path d={plot.framePath} />
+              </clipPath>
+            </defs>
+            <PlotBackdrop geometry={geometry} />
+            <g clipPath={`url(#${clipId})`}>
+              {plot.regionPaths.map((d, i) => (
+                <path key={i} data-testid="splane-region" d={d} fill="var(--color-accent)" fillOpacity={0.16} stroke="var(--color-accent)" strokeWidth={1.75} strokeLinejoin="round" />
+              ))}
+              {plot.boundaryPaths.map((b) => (
+                <path
+                  key={b.key}
+                  d={b.d}
+                  fill="none"
+                  stroke={b.binding ? 'var(--color-accent-strong)' : 'var(--color-ink-faint)'}
+                  strokeWidth={1}
+                  strokeDasharray={b.binding ? undefined : '2 3'}
+                  opacity={0.8}
+                />
+              ))}
+              {plot.dominanceLine && (
+                <path d={plot.dominanceLine.d} fill="none" stroke="var(--color-ink-muted)" strokeWidth={1.25} strokeDasharray="6 4" />
+              )}
+              {shownPixel && <circle cx={shownPixel.x} cy={shownPixel.y} r={markSize * 2.6} fill="none" stroke="var(--color-caution)" strokeWidth={2} />}
             </g>
-          ))}
-          {plot.dominanceLine && (
-            <text x={plot.dominanceLine.label.x} y={plot.dominanceLine.label.y} dominantBaseline="hanging" fontSize={11} fill="var(--color-ink-muted)" paintOrder="stroke" stroke="var(--color-paper-raised)" strokeWidth={3}>
-              {plot.dominanceLine.label.text}
-            </text>
+            {/* Outside the clip group: clipping thousands of strokes costs more than drawing them; every mark drawn is inside the view already. */}
+            {!heavy && <Marks geometry={geometry} />}
+            {!heavy && <UpperLayer geometry={geometry} />}
+          </svg>
+          {heavy && (
+            <>
+              <MarkCanvas geometry={geometry} markSize={markSize} />
+              {/* What lies over the marks (rings, edge marks, labels) stays vector, in a second SVG on top. */}
+              <svg width={plot.width} height={plot.height} viewBox={`0 0 ${plot.width} ${plot.height}`} aria-hidden="true" className="pointer-events-none absolute top-0 left-0 block max-w-full">
+                <UpperLayer geometry={geometry} />
+              </svg>
+            </>
           )}
-          {plot.boundaryPaths.map((b) => (
-            <g key={b.key} transform={`translate(${b.anchor.x},${b.anchor.y})`}>
-              <circle r={8} fill="var(--color-paper-raised)" stroke="var(--color-accent-strong)" strokeWidth={1} />
-              <text textAnchor="middle" dominantBaseline="central" fontSize={10} fontWeight={600} fill="var(--color-accent-strong)">
-                {b.key}
-              </text>
-            </g>
-          ))}
-        </svg>
         </div>
         {shownPole && shownPixel && hovered !== null && <Tooltip pole={shownPole} x={shownPixel.x} y={shownPixel.y} width={plot.width} />}
       </div>
@@ -435,9 +429,89 @@ const Marks = memo(function Marks({ geometry }: { geometry: SplaneGeometry }) {
   return (
     <g>
       {geometry.zeroPath && <path data-testid="splane-zeros" d={geometry.zeroPath} fill="none" stroke="var(--color-ink)" strokeWidth={1.5} />}
-      {geometry.polePath && <path data-testid="splane-poles" d={geometry.polePath} fill="none" stroke="var(--color-ink)" strokeWidth={1.5} shapeRendering={geometry.markCount > HEAVY_MARKS ? 'optimizeSpeed' : undefined} />}
-      {geometry.ringPath && <path data-testid="splane-dominant" d={geometry.ringPath} fill="none" stroke="var(--color-accent-strong)" strokeWidth={1.5} />}
+      {geometry.polePath && <path data-testid="splane-poles" d={geometry.polePath} fill="none" stroke="var(--color-ink)" strokeWidth={1.5} />}
     </g>
+  );
+});
+
+// Drawn over the marks: the dominant rings, the edge marks for roots outside the view and the labels.
+const UpperLayer = memo(function UpperLayer({ geometry }: { geometry: SplaneGeometry }) {
+  const { plot } = geometry;
+  return (
+    <>
+      {geometry.ringPath && <path data-testid="splane-dominant" d={geometry.ringPath} fill="none" stroke="var(--color-accent-strong)" strokeWidth={1.5} />}
+      {plot.offPlot.map((m, i) => (
+        <g key={i}>
+          <path d={m.d} fill="var(--color-ink-muted)" />
+        </g>
+      ))}
+      {plot.dominanceLine && (
+        <text x={plot.dominanceLine.label.x} y={plot.dominanceLine.label.y} dominantBaseline="hanging" fontSize={11} fill="var(--color-ink-muted)" paintOrder="stroke" stroke="var(--color-paper-raised)" strokeWidth={3}>
+          {plot.dominanceLine.label.text}
+        </text>
+      )}
+      {plot.boundaryPaths.map((b) => (
+        <g key={b.key} transform={`translate(${b.anchor.x},${b.anchor.y})`}>
+          <circle r={8} fill="var(--color-paper-raised)" stroke="var(--color-accent-strong)" strokeWidth={1} />
+          <text textAnchor="middle" dominantBaseline="central" fontSize={10} fontWeight={600} fill="var(--color-accent-strong)">
+            {b.key}
+          </text>
+        </g>
+      ))}
+    </>
+  );
+});
+
+// The ink colour as RGBA bytes: letting a 1x1 canvas parse the computed colour accepts any CSS colour syntax.
+function inkRgba(el: HTMLElement): [number, number, number, number] {
+  const probe = document.createElement('canvas').getContext('2d', { willReadFrequently: true });
+  if (!probe) return [0, 0, 0, 255];
+  probe.fillStyle = getComputedStyle(el).color;
+  probe.fillRect(0, 0, 1, 1);
+  const [r = 0, g = 0, b = 0, a = 255] = probe.getImageData(0, 0, 1, 1).data;
+  return [r, g, b, a];
+}
+
+// The pole and zero marks of a large set, on a canvas in the same box as the SVG, at the
+// screen's device pixel ratio, written pixel by pixel (see draw-marks.ts). The box can be a
+// little narrower than the plot (max-width), where the SVG scales its viewBox to fit: the
+// backing store follows the box as laid out and the marks take the same scale and offset, so
+// they stay crisp and land where the SVG would put them.
+const MarkCanvas = memo(function MarkCanvas({ geometry, markSize }: { geometry: SplaneGeometry; markSize: number }) {
+  const ref = useRef<HTMLCanvasElement>(null);
+  const { width, height } = geometry.plot;
+  useLayoutEffect(() => {
+    const canvas = ref.current;
+    const ctx = canvas?.getContext('2d');
+    if (!canvas || !ctx) return;
+    const dpr = window.devicePixelRatio || 1;
+    const box = canvas.getBoundingClientRect();
+    const deviceWidth = Math.max(1, Math.round(box.width * dpr));
+    const deviceHeight = Math.max(1, Math.round(box.height * dpr));
+    if (canvas.width !== deviceWidth) canvas.width = deviceWidth;
+    if (canvas.height !== deviceHeight) canvas.height = deviceHeight;
+    // The viewBox's default fit (xMidYMid meet): one scale, the content centred.
+    const fit = Math.min(box.width / width, box.height / height);
+    const scale = fit * dpr;
+    const dx = ((box.width - width * fit) / 2) * dpr;
+    const dy = ((box.height - height * fit) / 2) * dpr;
+    const toDevice = (points: Float64Array) => points.map((v, i) => v * scale + (i % 2 === 0 ? dx : dy));
+    const image = ctx.createImageData(deviceWidth, deviceHeight);
+    const buf = { data: image.data, width: deviceWidth, height: deviceHeight };
+    const style = { radius: markSize * scale, thickness: Math.max(1, Math.round(1.5 * dpr)), rgba: inkRgba(canvas) };
+    drawCrosses(buf, toDevice(geometry.polePoints), style);
+    drawRings(buf, toDevice(geometry.zeroPoints), style);
+    ctx.putImageData(image, 0, 0);
+  }, [geometry, markSize, width, height]);
+  return (
+    <canvas
+      ref={ref}
+      data-testid="splane-poles"
+      data-marks={geometry.markCount}
+      aria-hidden="true"
+      className="pointer-events-none absolute top-0 left-0 block max-w-full text-ink"
+      style={{ width, height }}
+    />
   );
 });
 
