@@ -7,3 +7,4 @@ export * from './common-passwords.js';
 export * from './reports.js';
 export * from './audit.js';
 export * from './api-tokens.js';
+export * from './requirement-words.js';

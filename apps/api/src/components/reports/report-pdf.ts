@@ -1,4 +1,4 @@
-import { REPORT_MEANING_LABELS, REPORT_MEANING_STATEMENTS, type PersonRef } from '@polecourt/contracts';
+import { REPORT_MEANING_LABELS, REPORT_MEANING_STATEMENTS, REQUIREMENT_WORDS, type PersonRef } from '@polecourt/contracts';
 import { plotFrame, splanePlot, splaneViewport, stepPlot } from '@polecourt/plots';
 import type { Check, Complex } from '@polecourt/spec';
 import { pdfkitAddPlaceholder } from '@signpdf/placeholder-pdfkit';
@@ -20,17 +20,6 @@ import { evidenceOf, type ReportContent } from './report-content.js';
 export const S_PLANE_BOX = { width: CONTENT_WIDTH, height: 310 };
 export const STEP_BOX = { width: CONTENT_WIDTH, height: 220 };
 
-const REQUIREMENT_WORDS: Record<string, { name: string; unit: string; kind: 'max' | 'min' | 'setting' }> = {
-  maxOvershootPct: { name: 'Percent overshoot', unit: '%', kind: 'max' },
-  maxSettlingTime: { name: 'Settling time', unit: 's', kind: 'max' },
-  settlingBandPct: { name: 'Settling band', unit: '%', kind: 'setting' },
-  maxPeakTime: { name: 'Peak time', unit: 's', kind: 'max' },
-  maxRiseTime: { name: 'Rise time (10-90 %)', unit: 's', kind: 'max' },
-  minDampingRatio: { name: 'Damping ratio', unit: '', kind: 'min' },
-  maxNaturalFrequency: { name: 'Natural frequency', unit: 'rad/s', kind: 'max' },
-  dominanceRatio: { name: 'Dominance ratio', unit: '', kind: 'setting' },
-  marginPct: { name: 'Margin', unit: '%', kind: 'setting' },
-};
 
 /** 4 significant figures, no trailing zeros, with a unit when given. */
 export function num(v: number | null | undefined, unit = ''): string {

@@ -1,4 +1,6 @@
-// How each limit of a requirement set reads on screen: its name, its unit and which way it points.
+// How each limit reads in the checks table: the shared words of @polecourt/contracts,
+// with the direction a check compares in.
+import { requirementWord as sharedWord } from '@polecourt/contracts';
 
 export interface RequirementWord {
   name: string;
@@ -7,18 +9,7 @@ export interface RequirementWord {
   sense: 'max' | 'min';
 }
 
-export const REQUIREMENT_WORDS: Record<string, RequirementWord> = {
-  maxOvershootPct: { name: 'Percent overshoot', unit: '%', sense: 'max' },
-  maxSettlingTime: { name: 'Settling time', unit: 's', sense: 'max' },
-  maxPeakTime: { name: 'Peak time', unit: 's', sense: 'max' },
-  maxRiseTime: { name: 'Rise time (10-90 %)', unit: 's', sense: 'max' },
-  minDampingRatio: { name: 'Damping ratio', unit: '', sense: 'min' },
-  maxNaturalFrequency: { name: 'Natural frequency', unit: 'rad/s', sense: 'max' },
-  settlingBandPct: { name: 'Settling band', unit: '%', sense: 'max' },
-  dominanceRatio: { name: 'Dominance ratio', unit: '', sense: 'min' },
-  marginPct: { name: 'Margin', unit: '%', sense: 'max' },
-};
-
 export function requirementWord(key: string): RequirementWord {
-  return REQUIREMENT_WORDS[key] ?? { name: key, unit: '', sense: 'max' };
+  const w = sharedWord(key);
+  return { name: w.name, unit: w.unit, sense: w.kind === 'min' ? 'min' : 'max' };
 }
