@@ -2,7 +2,7 @@ import { Op, QueryTypes, type Transaction, type WhereOptions } from 'sequelize';
 
 import { canonicalJson } from '../../lib/canonical-json.js';
 import { getSequelize } from '../../lib/transaction.js';
-import { chainHash } from './chain-hash.js';
+import { chainHash, chainedFieldsOf, type ChainedFields } from './chain-hash.js';
 import { AuditEventModel, AuditHeadModel } from './model.js';
 
 export interface AuditEventInput {
@@ -41,17 +41,8 @@ export interface AuditFilter {
 }
 
 /** An event as stored: before and after kept as the exact canonical JSON that was hashed. */
-export interface StoredAuditEvent {
+export interface StoredAuditEvent extends ChainedFields {
   id: number;
-  occurredAt: string;
-  actorId: number | null;
-  actorEmail: string | null;
-  action: string;
-  entityType: string;
-  entityId: string | null;
-  productLineId: number | null;
-  beforeJson: string | null;
-  afterJson: string | null;
   hash: string;
 }
 
@@ -148,19 +139,7 @@ export const auditRepository = {
         raw: true,
       });
       if (rows.length === 0) return;
-      yield rows.map((e) => ({
-        id: Number(e.id),
-        occurredAt: new Date(e.occurredAt).toISOString(),
-        actorId: e.actorId,
-        actorEmail: e.actorEmail,
-        action: e.action,
-        entityType: e.entityType,
-        entityId: e.entityId,
-        productLineId: e.productLineId,
-        beforeJson: e.beforeJson,
-        afterJson: e.afterJson,
-        hash: e.hash,
-      }));
+      yield rows.map((e) => ({ id: Number(e.id), ...chainedFieldsOf(e), hash: e.hash }));
       if (rows.length < batchSize) return;
       below = Number(rows[rows.length - 1]!.id);
     }
@@ -214,21 +193,10 @@ export const auditRepository = {
       if (rows.length === 0) break;
       for (const e of rows) {
         checked += 1;
-        const fields = {
-          occurredAt: new Date(e.occurredAt).toISOString(),
-          actorId: e.actorId,
-          actorEmail: e.actorEmail,
-          action: e.action,
-          entityType: e.entityType,
-          entityId: e.entityId,
-          productLineId: e.productLineId,
-          beforeJson: e.beforeJson,
-          afterJson: e.afterJson,
-        };
         if (e.prevHash !== prev) {
           return { intact: false, checked, firstBreak: { id: Number(e.id), reason: 'its link to the event before it does not match' } };
         }
-        if (chainHash(prev, fields) !== e.hash) {
+        if (chainHash(prev, chainedFieldsOf(e)) !== e.hash) {
           return { intact: false, checked, firstBreak: { id: Number(e.id), reason: 'its content does not match its hash' } };
         }
         prev = e.hash;

@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { type LoaderFunctionArgs, Link, useNavigate, useParams } from 'react-router-dom';
 
+import { Breadcrumbs } from '@/components/ui/breadcrumbs';
 import { ErrorBoundary } from '@/components/errors/error-boundary';
 import { ErrorPanel } from '@/components/errors/error-panel';
 import { Alert } from '@/components/ui/alert';
@@ -56,17 +57,12 @@ export default function CandidateRoute() {
     <>
       <title>{`${c?.name ?? 'Candidate'} · Polecourt`}</title>
       {c && (
-        <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-          <Link to="/candidates" className="text-accent underline underline-offset-2 hover:decoration-2">
-            Candidates
-          </Link>{' '}
-          <span aria-hidden="true" className="text-ink-faint">
-            /
-          </span>{' '}
-          <Link to={`/product-lines/${c.productLineId}/candidates`} className="text-accent underline underline-offset-2 hover:decoration-2">
-            {line.data?.name ?? 'Product line'}
-          </Link>
-        </nav>
+        <Breadcrumbs
+          items={[
+            { label: 'Candidates', to: '/candidates' },
+            { label: line.data?.name ?? 'Product line', to: `/product-lines/${c.productLineId}/candidates` },
+          ]}
+        />
       )}
       <PageHeader title={c?.name ?? 'Candidate'} lead={line.data ? `A candidate of ${line.data.name}.` : undefined} />
       <RequireArea area="candidates">

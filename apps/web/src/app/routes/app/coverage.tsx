@@ -2,6 +2,7 @@ import { COVERAGE_FILTERS, type CoverageFilter } from '@polecourt/contracts';
 import type { QueryClient } from '@tanstack/react-query';
 import { type LoaderFunctionArgs, Link, useParams, useSearchParams } from 'react-router-dom';
 
+import { Breadcrumbs } from '@/components/ui/breadcrumbs';
 import { ErrorBoundary } from '@/components/errors/error-boundary';
 import { ErrorPanel } from '@/components/errors/error-panel';
 import { Alert } from '@/components/ui/alert';
@@ -49,11 +50,7 @@ export default function CoverageRoute() {
   return (
     <>
       <title>{`Coverage of ${name ?? 'a product line'} · Polecourt`}</title>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link to={`/product-lines/${id}/candidates`} className="text-accent underline underline-offset-2 hover:decoration-2">
-          Candidates of {name ?? 'the product line'}
-        </Link>
-      </nav>
+      <Breadcrumbs items={[{ label: `Candidates of ${name ?? 'the product line'}`, to: `/product-lines/${id}/candidates` }]} />
       <PageHeader
         title={name ? `Coverage of ${name}` : 'Coverage'}
         lead="Every candidate against each approved revision, with its latest verdict: what still needs assessing, what was only ever assessed against a retired revision, and what does not comply."

@@ -1,5 +1,6 @@
 import { Link, useNavigate, useParams } from 'react-router-dom';
 
+import { Breadcrumbs } from '@/components/ui/breadcrumbs';
 import { Alert } from '@/components/ui/alert';
 import { PageHeader } from '@/components/ui/page-header';
 import { useMe } from '@/features/auth/api/get-me';
@@ -19,11 +20,7 @@ export default function NewCandidateRoute() {
   return (
     <>
       <title>Enter a candidate · Polecourt</title>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link to={back} className="text-accent underline underline-offset-2 hover:decoration-2">
-          Candidates of {line.data?.name ?? 'the product line'}
-        </Link>
-      </nav>
+      <Breadcrumbs items={[{ label: `Candidates of ${line.data?.name ?? 'the product line'}`, to: back }]} />
       <PageHeader title="Enter a candidate" lead="One closed-loop model, typed in as poles, zeros and gain or as transfer-function coefficients." />
       <RequireArea area="candidates">
         {() =>

@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { type LoaderFunctionArgs, Link, useParams } from 'react-router-dom';
 
+import { Breadcrumbs } from '@/components/ui/breadcrumbs';
 import { ErrorBoundary } from '@/components/errors/error-boundary';
 import { ErrorPanel } from '@/components/errors/error-panel';
 import { Alert } from '@/components/ui/alert';
@@ -43,15 +44,7 @@ export default function ProductLineCandidatesRoute() {
   return (
     <>
       <title>{`Candidates of ${name ?? 'a product line'} · Polecourt`}</title>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link to="/candidates" className="text-accent underline underline-offset-2 hover:decoration-2">
-          Candidates
-        </Link>{' '}
-        <span aria-hidden="true" className="text-ink-faint">
-          /
-        </span>{' '}
-        <span>{name ?? '…'}</span>
-      </nav>
+      <Breadcrumbs items={[{ label: 'Candidates', to: '/candidates' }, { label: name ?? '…' }]} />
       <PageHeader
         title={name ? `Candidates of ${name}` : 'Candidates'}
         lead={line.data?.description || 'Closed-loop models submitted for this product line, and their latest verdicts.'}

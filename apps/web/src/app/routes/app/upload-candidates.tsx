@@ -1,5 +1,6 @@
 import { Link, useParams } from 'react-router-dom';
 
+import { Breadcrumbs } from '@/components/ui/breadcrumbs';
 import { Alert } from '@/components/ui/alert';
 import { PageHeader } from '@/components/ui/page-header';
 import { useMe } from '@/features/auth/api/get-me';
@@ -18,11 +19,7 @@ export default function UploadCandidatesRoute() {
   return (
     <>
       <title>Upload candidates · Polecourt</title>
-      <nav aria-label="Breadcrumb" className="mb-2 text-sm">
-        <Link to={back} className="text-accent underline underline-offset-2 hover:decoration-2">
-          Candidates of {line.data?.name ?? 'the product line'}
-        </Link>
-      </nav>
+      <Breadcrumbs items={[{ label: `Candidates of ${line.data?.name ?? 'the product line'}`, to: back }]} />
       <PageHeader title="Upload candidates" lead={`Several candidates at once${line.data ? ` for ${line.data.name}` : ''}, from one JSON or CSV file.`} />
       <RequireArea area="candidates">
         {() =>
