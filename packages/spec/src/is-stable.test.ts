@@ -3,6 +3,8 @@ import { stability } from './is-stable.js';
 import { parseDesign } from './parse-design.js';
 import { pairOf, re } from '../test/design-builders.js';
 
+// Source: a fact of the trade (every text on linear systems, e.g. Nise ch. 6, from memory): a continuous-time
+// model is stable when every pole has a negative real part, marginal with poles on the imaginary axis.
 describe('stability', () => {
   it.each([
     ['stable', [...pairOf(-1, 2), re(-3)], true, null],

@@ -6,6 +6,8 @@ import { parseDesign } from './parse-design.js';
 import { assertClose } from '../test/asserts.js';
 import { pairOf, re, zpkWithDcGain } from '../test/design-builders.js';
 
+// No reference values here: the samples are checked against the engine's own exact response (checked
+// against odex in step-response.test.ts) and for the sampling rules themselves.
 describe('sampleStepResponse', () => {
   const model = parseDesign(zpkWithDcGain([...pairOf(-0.5, 6), re(-10)]));
 
