@@ -1,7 +1,6 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 
-import ConnectSessionSequelize from 'connect-session-sequelize';
 import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
@@ -26,6 +25,7 @@ import type { Config } from './config.js';
 import { csrfGuard, loadUser } from './lib/auth-middleware.js';
 import { contentTypeGuard } from './lib/content-type-guard.js';
 import { errorMiddleware, notFoundApi } from './lib/error-middleware.js';
+import { LeanSessionStore } from './lib/session-store.js';
 import './lib/request-context.js';
 
 export const SESSION_COOKIE = 'polecourt.sid';
@@ -64,8 +64,7 @@ export function buildApp(config: Config, sequelize: Sequelize): BuiltApp {
   // Health answers without touching the session store, so it can say "down".
   app.use('/api/health', healthRoutes(sequelize));
 
-  const SequelizeStore = ConnectSessionSequelize(session.Store);
-  const store = new SequelizeStore({
+  const store = new LeanSessionStore({
     db: sequelize,
     tableName: 'sessions',
     checkExpirationInterval: 15 * 60 * 1000,

@@ -5,21 +5,23 @@ import type { NextFunction, Request, Response } from 'express';
 import type { Role } from '@polecourt/contracts';
 
 import { userRepository } from '../components/users/repository.js';
+import { sessionUser } from '../components/users/session-user-cache.js';
 import { AppError } from './app-error.js';
 import type { SessionUser } from './request-context.js';
 
 /**
- * Loads the signed-in user on every request from the database, so a
- * deactivated account or a changed role takes effect at once.
+ * Loads the signed-in user on every request (kept for a second: see
+ * session-user-cache.ts), so a deactivated account or a changed role takes
+ * effect within about a second.
  */
 export async function loadUser(req: Request, _res: Response, next: NextFunction): Promise<void> {
   // Already known from an API token (loadTokenUser runs first): the cookie is not consulted.
   if (req.apiToken) return next();
   const userId = req.session?.userId;
   if (userId !== undefined) {
-    const user = await userRepository.findById(userId);
-    if (user && user.active) {
-      req.user = { id: user.id, email: user.email, name: user.name, role: user.role };
+    const user = await sessionUser(userId, (id) => userRepository.findById(id));
+    if (user) {
+      req.user = user;
     } else {
       delete req.session.userId;
     }

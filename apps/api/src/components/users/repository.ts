@@ -1,8 +1,10 @@
-import type { Transaction } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 
 import type { PublicUser, Role } from '@polecourt/contracts';
 
+import { getSequelize } from '../../lib/transaction.js';
 import { UserModel } from './model.js';
+import { forgetSessionUser } from './session-user-cache.js';
 
 export interface UserRecord extends PublicUser {
   passwordHash: string | null;
@@ -23,6 +25,39 @@ function toRecord(row: UserModel | null): UserRecord | null {
   };
 }
 
+interface UserRow {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  active: number | boolean;
+  password_hash: string | null;
+  created_at: Date;
+  last_login_at: Date | null;
+}
+
+// Every request of a signed-in session loads its user: one plain query
+// rather than a model instance keeps that cheap.
+async function selectUser(where: string, value: unknown, transaction?: Transaction): Promise<UserRecord | null> {
+  const rows = await getSequelize().query<UserRow>(`SELECT id, email, name, role, active, password_hash, created_at, last_login_at FROM users WHERE ${where} = ?`, {
+    replacements: [value],
+    type: QueryTypes.SELECT,
+    transaction,
+  });
+  const u = rows[0];
+  if (!u) return null;
+  return {
+    id: Number(u.id),
+    email: u.email,
+    name: u.name,
+    role: u.role,
+    active: Boolean(u.active),
+    passwordHash: u.password_hash,
+    createdAt: new Date(u.created_at).toISOString(),
+    lastLoginAt: u.last_login_at ? new Date(u.last_login_at).toISOString() : null,
+  };
+}
+
 export function toPublicUser(u: UserRecord): PublicUser {
   const { passwordHash: _omit, ...rest } = u;
   return rest;
@@ -30,11 +65,11 @@ export function toPublicUser(u: UserRecord): PublicUser {
 
 export const userRepository = {
   async findByEmail(email: string): Promise<UserRecord | null> {
-    return toRecord(await UserModel.findOne({ where: { email: email.trim().toLowerCase() } }));
+    return selectUser('email', email.trim().toLowerCase());
   },
 
   async findById(id: number, transaction?: Transaction): Promise<UserRecord | null> {
-    return toRecord(await UserModel.findByPk(id, { transaction }));
+    return selectUser('id', id, transaction);
   },
 
   async list(limit: number, offset: number): Promise<{ items: UserRecord[]; total: number }> {
@@ -60,8 +95,9 @@ export const userRepository = {
     changes: Partial<{ name: string; role: Role; active: boolean; passwordHash: string; lastLoginAt: Date }>,
     transaction?: Transaction,
   ): Promise<UserRecord | null> {
+    forgetSessionUser(id);
     await UserModel.update(changes, { where: { id }, transaction });
-    return toRecord(await UserModel.findByPk(id, { transaction }));
+    return selectUser('id', id, transaction);
   },
 
   async countActiveAdmins(transaction?: Transaction): Promise<number> {
