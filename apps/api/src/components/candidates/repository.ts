@@ -43,8 +43,23 @@ export interface NewCandidate {
 }
 
 export const candidateRepository = {
+  // A plain query: every assessment request reads its candidate.
   async findById(id: number, transaction?: Transaction): Promise<CandidateRecord | null> {
-    return toRecord(await CandidateModel.findByPk(id, { transaction }));
+    const rows = await getSequelize().query<{ id: number; product_line_id: number; name: string; notes: string; design_json: string; created_by: number | null; created_at: Date }>(
+      'SELECT id, product_line_id, name, notes, design_json, created_by, created_at FROM candidates WHERE id = ?',
+      { replacements: [id], type: QueryTypes.SELECT, transaction },
+    );
+    const c = rows[0];
+    if (!c) return null;
+    return {
+      id: Number(c.id),
+      productLineId: Number(c.product_line_id),
+      name: c.name,
+      notes: c.notes,
+      design: JSON.parse(c.design_json) as Record<string, unknown>,
+      createdBy: c.created_by === null ? null : Number(c.created_by),
+      createdAt: new Date(c.created_at).toISOString(),
+    };
   },
   async listByLine(productLineId: number, limit: number, offset: number): Promise<{ items: CandidateRecord[]; total: number }> {
     const { rows, count } = await CandidateModel.findAndCountAll({ where: { productLineId }, order: [['id', 'DESC']], limit, offset });

@@ -31,13 +31,31 @@ function toRecord(row: RequirementSetModel | null): RequirementSetRecord | null 
   };
 }
 
+// A plain query for reads by id (every assessment checks its revision's set).
+async function selectById(id: number, transaction: Transaction | undefined, lock: '' | 'FOR UPDATE'): Promise<RequirementSetRecord | null> {
+  const rows = await getSequelize().query<{ id: number; product_line_id: number; name: string; purpose: string; created_by: number | null; created_at: Date }>(
+    `SELECT id, product_line_id, name, purpose, created_by, created_at FROM requirement_sets WHERE id = ? ${lock}`,
+    { replacements: [id], type: QueryTypes.SELECT, transaction },
+  );
+  const s = rows[0];
+  if (!s) return null;
+  return {
+    id: Number(s.id),
+    productLineId: Number(s.product_line_id),
+    name: s.name,
+    purpose: s.purpose,
+    createdBy: s.created_by === null ? null : Number(s.created_by),
+    createdAt: new Date(s.created_at).toISOString(),
+  };
+}
+
 export const requirementSetRepository = {
-  async findById(id: number, transaction?: Transaction): Promise<RequirementSetRecord | null> {
-    return toRecord(await RequirementSetModel.findByPk(id, { transaction }));
+  findById(id: number, transaction?: Transaction): Promise<RequirementSetRecord | null> {
+    return selectById(id, transaction, '');
   },
   /** Locks the set's row: approvals and new revision numbers of one set line up behind it. */
-  async lock(id: number, transaction: Transaction): Promise<RequirementSetRecord | null> {
-    return toRecord(await RequirementSetModel.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE }));
+  lock(id: number, transaction: Transaction): Promise<RequirementSetRecord | null> {
+    return selectById(id, transaction, 'FOR UPDATE');
   },
   async findByName(productLineId: number, name: string, transaction?: Transaction): Promise<RequirementSetRecord | null> {
     return toRecord(await RequirementSetModel.findOne({ where: { productLineId, name }, transaction }));

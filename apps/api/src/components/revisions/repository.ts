@@ -1,8 +1,9 @@
-import { Op, type Transaction } from 'sequelize';
+import { Op, QueryTypes, type InferAttributes, type Transaction } from 'sequelize';
 
 import type { ImpactAcknowledgement, Revision, RevisionStatus } from '@polecourt/contracts';
 
 import { personOrUnknown, personRefs } from '../../lib/person-refs.js';
+import { getSequelize } from '../../lib/transaction.js';
 import { RevisionModel } from './model.js';
 
 /** A revision as stored, plus the person fields; what use cases work with. */
@@ -28,9 +29,11 @@ export interface RevisionRecord {
 
 const iso = (d: Date | string | null | undefined): string | null => (d ? new Date(d).toISOString() : null);
 
-function toRecord(row: RevisionModel | null): RevisionRecord | null {
+type RevisionRow = InferAttributes<RevisionModel>;
+
+function toRecord(row: RevisionModel | RevisionRow | null | undefined): RevisionRecord | null {
   if (!row) return null;
-  const r = row.get({ plain: true });
+  const r = (row instanceof RevisionModel ? row.get({ plain: true }) : row) as RevisionRow;
   return {
     id: r.id,
     requirementSetId: r.requirementSetId,
@@ -75,12 +78,27 @@ function toColumns(c: RevisionChanges): Partial<RevisionModel> {
   } as Partial<RevisionModel>;
 }
 
+// The columns under the model's attribute names, for plain queries on hot
+// paths (a revision is read by every region, impact and assessment request).
+const COLUMNS = `id, requirement_set_id AS requirementSetId, number, status, requirements_json AS requirementsJson, rationale, version,
+  author_id AS authorId, approver_id AS approverId, submitted_at AS submittedAt, approved_at AS approvedAt, retired_at AS retiredAt,
+  sha256, approval_meaning AS approvalMeaning, impact_json AS impactJson, created_at AS createdAt, updated_at AS updatedAt`;
+
+async function selectById(id: number, transaction: Transaction | undefined, lock: '' | 'FOR UPDATE' | 'LOCK IN SHARE MODE'): Promise<RevisionRecord | null> {
+  const rows = await getSequelize().query<RevisionRow>(`SELECT ${COLUMNS} FROM revisions WHERE id = ? ${lock}`, { replacements: [id], type: QueryTypes.SELECT, transaction });
+  return toRecord(rows[0]);
+}
+
 export const revisionRepository = {
-  async findById(id: number, transaction?: Transaction): Promise<RevisionRecord | null> {
-    return toRecord(await RevisionModel.findByPk(id, { transaction }));
+  findById(id: number, transaction?: Transaction): Promise<RevisionRecord | null> {
+    return selectById(id, transaction, '');
   },
-  async lock(id: number, transaction: Transaction): Promise<RevisionRecord | null> {
-    return toRecord(await RevisionModel.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE }));
+  lock(id: number, transaction: Transaction): Promise<RevisionRecord | null> {
+    return selectById(id, transaction, 'FOR UPDATE');
+  },
+  /** Read under a shared lock: the row cannot change (be retired) until the transaction ends. */
+  lockShared(id: number, transaction: Transaction): Promise<RevisionRecord | null> {
+    return selectById(id, transaction, 'LOCK IN SHARE MODE');
   },
   async listBySet(requirementSetId: number, transaction?: Transaction): Promise<RevisionRecord[]> {
     const rows = await RevisionModel.findAll({ where: { requirementSetId }, order: [['number', 'DESC']], transaction });
