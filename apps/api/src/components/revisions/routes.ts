@@ -4,6 +4,7 @@ import { approveRevisionSchema, regionQuerySchema } from '@polecourt/contracts';
 
 import { currentUser, requireRole } from '../../lib/auth-middleware.js';
 import { parseId } from '../../lib/pagination.js';
+import { sendJson } from '../../lib/send-json.js';
 import { ANY_ROLE, REQUIREMENT_WRITERS } from '../../lib/roles.js';
 import { validate } from '../../lib/validate.js';
 import { createRevisionSchema, diffQuerySchema, patchRevisionSchema } from './schemas.js';
@@ -63,7 +64,7 @@ export function revisionRoutes(): Router {
   router.get('/revisions/:id/region', requireRole(...ANY_ROLE), async (req, res) => {
     const id = parseId(req.params.id, REVISION);
     const viewport = validate(regionQuerySchema, req.query, 'invalid_query');
-    res.json(await revisionRegion(id, viewport));
+    sendJson(req, res, await revisionRegion(id, viewport));
   });
 
   router.get('/revisions/:id/impact', requireRole(...ANY_ROLE), async (req, res) => {

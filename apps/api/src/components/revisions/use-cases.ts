@@ -1,7 +1,6 @@
 import type { Transaction } from 'sequelize';
 
 import type { RegionResponse, Revision, RevisionDiff, RevisionImpact, Viewport } from '@polecourt/contracts';
-import { regionBounds, regionPolygons } from '@polecourt/spec';
 
 import { AppError } from '../../lib/app-error.js';
 import { verifyPassword } from '../../lib/password.js';
@@ -13,7 +12,7 @@ import { userRepository } from '../users/repository.js';
 import { noticeRevisionApproved, noticeRevisionSubmitted } from '../workflow-notices/notices.js';
 import { diffRequirements } from './diff.js';
 import { acknowledgement, computeImpact } from './impact.js';
-import { defaultViewport, mergeViewport } from './region-viewport.js';
+import { frozenRequirementsOr, regionResponse } from './region-response.js';
 import { revisionRepository, toRevision, type RevisionRecord } from './repository.js';
 import { requirementsSha256 } from './requirements-sha256.js';
 
@@ -219,13 +218,7 @@ export async function diffRevision(id: number, againstId: number | undefined): P
 }
 
 export async function revisionRegion(id: number, given: Partial<Viewport>): Promise<RegionResponse> {
-  const revision = await findRevision(id);
-  const bounds = regionBounds(revision.requirements);
-  const viewport = mergeViewport(defaultViewport(bounds), given);
-  if (!(viewport.reMin < viewport.reMax)) throw AppError.badRequest('invalid_query', 'reMin must be less than reMax.', { reMin: 'must be less than reMax' });
-  if (!(viewport.imMin < viewport.imMax)) throw AppError.badRequest('invalid_query', 'imMin must be less than imMax.', { imMin: 'must be less than imMax' });
-  const polygons = regionPolygons(bounds, viewport);
-  return { revisionId: id, viewport, bounds: bounds as unknown as Record<string, unknown>, polygons: polygons as unknown as Record<string, unknown> };
+  return regionResponse(id, await frozenRequirementsOr(id, () => findRevision(id)), given);
 }
 
 export async function revisionImpact(id: number): Promise<RevisionImpact> {
