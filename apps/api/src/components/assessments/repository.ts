@@ -74,10 +74,17 @@ export interface NewAssessment {
 }
 
 export const assessmentRepository = {
-  async create(data: NewAssessment, transaction: Transaction): Promise<number> {
-    const { result, ...rest } = data;
-    const row = await AssessmentModel.create({ ...rest, resultJson: JSON.stringify(result) }, { transaction });
-    return row.id;
+  async create(data: NewAssessment & { createdAt?: Date }, transaction: Transaction): Promise<number> {
+    const [id] = await getSequelize().query(
+      `INSERT INTO assessments (candidate_id, revision_id, revision_sha256, engine_version, verdict, result_json, created_by, created_at)
+       VALUES (?, ?, ?, ?, ?, ?, ?, ?)`,
+      {
+        replacements: [data.candidateId, data.revisionId, data.revisionSha256, data.engineVersion, data.verdict, JSON.stringify(data.result), data.createdBy, data.createdAt ?? new Date()],
+        type: QueryTypes.INSERT,
+        transaction,
+      },
+    );
+    return Number(id);
   },
   async findById(id: number, transaction?: Transaction): Promise<AssessmentRecord | null> {
     const rows = await getSequelize().query<AssessmentRow>(`${SELECT_WITH_STATUS} WHERE a.id = ?`, { replacements: [id], type: QueryTypes.SELECT, transaction });

@@ -1,3 +1,4 @@
+import LRUCache from 'lru-cache';
 import type { Transaction } from 'sequelize';
 
 import type { ListResponse, StoredAssessment } from '@polecourt/contracts';
@@ -7,12 +8,12 @@ import { AppError } from '../../lib/app-error.js';
 import { parseWithEngine } from '../../lib/engine-input.js';
 import { personOrUnknown, personRefs } from '../../lib/person-refs.js';
 import type { SessionUser } from '../../lib/request-context.js';
+import { GroupCommit } from '../../lib/group-commit.js';
 import { inTransaction } from '../../lib/transaction.js';
-import { recordAudit } from '../audit/record-audit.js';
+import { recordAuditMany } from '../audit/record-audit.js';
 import { candidateRepository, type CandidateRecord } from '../candidates/repository.js';
 import { requirementSetRepository } from '../requirement-sets/repository.js';
 import { revisionRepository, type RevisionRecord } from '../revisions/repository.js';
-import { RevisionModel } from '../revisions/model.js';
 import { noticeAssessmentNotCompliant } from '../workflow-notices/notices.js';
 import { assessmentRepository, type AssessmentRecord } from './repository.js';
 
@@ -33,22 +34,51 @@ async function toStored(records: AssessmentRecord[], t?: Transaction): Promise<S
 
 // ---- steps ------------------------------------------------------------------
 
+// Reads kept for the pipelines that assess the same candidates again and
+// again. Candidates and requirement sets are never changed once created (no
+// route edits them), nor is an approved revision's content; an approved
+// revision's status can still move on (retired), which is why it is checked
+// again under a lock in storeAssessments.
+const candidates = new LRUCache<number, CandidateRecord>({ max: 5_000 });
+const lineOfSet = new LRUCache<number, number>({ max: 5_000 });
+const approvedRevisions = new LRUCache<number, RevisionRecord>({ max: 5_000 });
+
 async function findCandidate(id: number): Promise<CandidateRecord> {
+  const kept = candidates.get(id);
+  if (kept) return kept;
   const candidate = await candidateRepository.findById(id);
   if (!candidate) throw AppError.notFound('That candidate');
+  candidates.set(id, candidate);
   return candidate;
+}
+
+async function findRevisionInLine(revisionId: number, productLineId: number): Promise<RevisionRecord | null> {
+  let revision = approvedRevisions.get(revisionId) ?? null;
+  if (!revision) {
+    revision = await revisionRepository.findById(revisionId);
+    if (revision?.status === 'approved') approvedRevisions.set(revisionId, revision);
+  }
+  if (!revision) return null;
+  let line = lineOfSet.get(revision.requirementSetId);
+  if (line === undefined) {
+    const set = await requirementSetRepository.findById(revision.requirementSetId);
+    if (!set) return null;
+    line = set.productLineId;
+    lineOfSet.set(set.id, line);
+  }
+  return line === productLineId ? revision : null;
 }
 
 /** The revision named, or the line's only approved one; it must be of the candidate's product line. */
 async function pickRevision(candidate: CandidateRecord, revisionId: number | undefined): Promise<RevisionRecord> {
-  const sets = await requirementSetRepository.listAllByLine(candidate.productLineId);
   if (revisionId !== undefined) {
-    const revision = await revisionRepository.findById(revisionId);
-    if (!revision || !sets.some((s) => s.id === revision.requirementSetId)) {
+    const revision = await findRevisionInLine(revisionId, candidate.productLineId);
+    if (!revision) {
       throw AppError.badRequest('invalid_input', 'That revision is not one of this product line’s requirement sets.', { revisionId: 'not a revision of this product line' });
     }
     return revision;
   }
+  const sets = await requirementSetRepository.listAllByLine(candidate.productLineId);
   const approved = await revisionRepository.findApprovedInSets(sets.map((s) => s.id));
   if (approved.length === 0) {
     throw AppError.badRequest('no_approved_revision', 'This product line has no approved requirement revision yet, so there is nothing to assess against.', {
@@ -76,18 +106,38 @@ function assertApproved(revision: RevisionRecord): void {
 
 // ---- use cases --------------------------------------------------------------
 
-export async function createAssessment(actor: SessionUser, candidateId: number, input: { revisionId?: number | undefined }): Promise<StoredAssessment> {
-  const candidate = await findCandidate(candidateId);
-  const picked = await pickRevision(candidate, input.revisionId);
-  assertApproved(picked);
-  const id = await inTransaction(async (t) => {
-    // A shared lock on the revision: it cannot be retired while this assessment is stored.
-    await RevisionModel.findByPk(picked.id, { transaction: t, lock: t.LOCK.SHARE });
-    const revision = (await revisionRepository.findById(picked.id, t))!;
-    assertApproved(revision);
-    const result = parseWithEngine('design', () => evaluate(candidate.design, revision.requirements));
+interface AssessmentJob {
+  actor: SessionUser;
+  candidate: CandidateRecord;
+  revisionId: number;
+  /** The engine's verdict on the revision's requirements, frozen since approval, so worked out before the transaction. */
+  result: ReturnType<typeof evaluate>;
+}
+
+// Assessments under load are stored by group commit: those requested while a
+// transaction is under way go together in the next, one lock of the audit
+// chain for all of them, each answered on its own.
+const assessmentWrites = new GroupCommit<AssessmentJob, StoredAssessment>(storeAssessments, inTransaction);
+
+async function storeAssessments(jobs: AssessmentJob[], t: Transaction): Promise<(StoredAssessment | Error)[]> {
+  // A shared lock on each revision: it cannot be retired while these assessments are stored.
+  const revisions = new Map<number, RevisionRecord>();
+  for (const id of new Set(jobs.map((j) => j.revisionId))) revisions.set(id, (await revisionRepository.lockShared(id, t))!);
+  const outcomes: (StoredAssessment | Error)[] = [];
+  const events: Parameters<typeof recordAuditMany>[1] = [];
+  const notices: { assessmentId: number; job: AssessmentJob; revision: RevisionRecord }[] = [];
+  for (const job of jobs) {
+    const revision = revisions.get(job.revisionId)!;
+    try {
+      assertApproved(revision);
+    } catch (e) {
+      outcomes.push(e as Error);
+      continue;
+    }
+    const { actor, candidate, result } = job;
+    const createdAt = new Date();
     const stored = {
-      candidateId,
+      candidateId: candidate.id,
       revisionId: revision.id,
       revisionSha256: revision.sha256!,
       engineVersion: result.engineVersion ?? ENGINE_VERSION,
@@ -95,20 +145,35 @@ export async function createAssessment(actor: SessionUser, candidateId: number, 
       result,
       createdBy: actor.id,
     };
-    const newId = await assessmentRepository.create(stored, t);
-    await recordAudit(t, actor, {
-      action: 'assessment.create',
-      entityType: 'assessment',
-      entityId: newId,
-      productLineId: candidate.productLineId,
-      after: { id: newId, ...stored },
+    const id = await assessmentRepository.create({ ...stored, createdAt }, t);
+    events.push({ actor, event: { action: 'assessment.create', entityType: 'assessment', entityId: id, productLineId: candidate.productLineId, after: { id, ...stored } } });
+    if (stored.verdict === 'noncompliant') notices.push({ assessmentId: id, job, revision });
+    // What was just written, as getAssessment would read it back, without reading it back.
+    outcomes.push({
+      id,
+      candidateId: candidate.id,
+      revisionId: revision.id,
+      revisionSha256: stored.revisionSha256,
+      engineVersion: stored.engineVersion,
+      createdAt: createdAt.toISOString(),
+      createdBy: { id: actor.id, name: actor.name, email: actor.email },
+      revisionStatus: revision.status,
+      result: result as unknown as StoredAssessment['result'],
     });
-    if (stored.verdict === 'noncompliant') {
-      await noticeAssessmentNotCompliant(t, { assessmentId: newId, candidate, revision, result });
-    }
-    return newId;
-  });
-  return getAssessment(id);
+  }
+  await recordAuditMany(t, events);
+  for (const n of notices) {
+    await noticeAssessmentNotCompliant(t, { assessmentId: n.assessmentId, candidate: n.job.candidate, revision: n.revision, result: n.job.result });
+  }
+  return outcomes;
+}
+
+export async function createAssessment(actor: SessionUser, candidateId: number, input: { revisionId?: number | undefined }): Promise<StoredAssessment> {
+  const candidate = await findCandidate(candidateId);
+  const picked = await pickRevision(candidate, input.revisionId);
+  assertApproved(picked);
+  const result = parseWithEngine('design', () => evaluate(candidate.design, picked.requirements));
+  return assessmentWrites.submit({ actor, candidate, revisionId: picked.id, result });
 }
 
 export async function getAssessment(id: number): Promise<StoredAssessment> {

@@ -11,3 +11,11 @@ export function recordAudit(
 ): Promise<unknown> {
   return auditRepository.append({ ...event, actor: actor ? { id: actor.id, email: actor.email } : null }, transaction);
 }
+
+/** Several events of writes that commit together (a group commit), in order, under one lock of the chain's head. */
+export function recordAuditMany(transaction: Transaction, events: { actor: SessionUser | null; event: Omit<AuditEventInput, 'actor'> }[]): Promise<unknown> {
+  return auditRepository.appendMany(
+    events.map(({ actor, event }) => ({ ...event, actor: actor ? { id: actor.id, email: actor.email } : null })),
+    transaction,
+  );
+}
