@@ -4,8 +4,11 @@ import { DEMO, DEMO_PASSWORD, TestClient, signedIn } from './helpers/client.js';
 import { startTestServer, stopTestServer } from './helpers/server.js';
 
 let url: string;
+let sequelize: Awaited<ReturnType<typeof startTestServer>>['sequelize'];
 beforeAll(async () => {
-  url = (await startTestServer()).url;
+  const running = await startTestServer();
+  url = running.url;
+  sequelize = running.sequelize;
 });
 afterAll(stopTestServer);
 
@@ -68,6 +71,25 @@ describe('POST /api/auth/logout', () => {
     expect(out.status).toBe(204);
     const me = await c.get('/api/auth/me');
     expect(me.status).toBe(401);
+  });
+
+  it('When the cookie of a session just read is replayed after logout, then it is refused at once (no kept copy of the session serves it)', async () => {
+    const c = await signedIn(url, 'systems_engineer');
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+    const copy = c.cookieHeader;
+    expect((await c.post('/api/auth/logout')).status).toBe(204);
+    const replay = await fetch(`${url}/api/auth/me`, { headers: { cookie: copy, accept: 'application/json' } });
+    expect(replay.status).toBe(401);
+  });
+});
+
+describe('session expiry', () => {
+  it('When the stored session is past its expiry, then its cookie no longer signs in, even before the clean-up timer removes the row', async () => {
+    const c = await signedIn(url, 'auditor');
+    // The cookie is s:<sid>.<signature>, URL-encoded.
+    const sid = decodeURIComponent(c.cookieHeader).match(/polecourt\.sid=s:([^.;]+)/)![1]!;
+    await sequelize.query('UPDATE sessions SET expires = ? WHERE sid = ?', { replacements: [new Date(Date.now() - 60_000), sid] });
+    expect((await c.get('/api/auth/me')).status).toBe(401);
   });
 });
 

@@ -1,4 +1,5 @@
 import { createHash } from 'node:crypto';
+import { get as httpGet } from 'node:http';
 
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 
@@ -464,6 +465,39 @@ describe('GET /api/revisions/:id/region', () => {
     expect(nan.status).toBe(400);
     expect(nan.body.error.fields).toHaveProperty('imMax');
     expect((await team.controls.get('/api/revisions/999999/region')).status).toBe(404);
+  });
+
+  it('When a draft is edited, then its region follows the new limits (regions are kept per limits, never stale)', async () => {
+    const { set } = await freshSet();
+    const d = await draft(team, set.id, LIMITS);
+    const before = await team.controls.get(`/api/revisions/${d.id}/region`);
+    expect(before.body.bounds.maxNaturalFrequency).toBe(20);
+    const edited = await team.systems.patch(`/api/revisions/${d.id}`, { requirements: { ...LIMITS, maxNaturalFrequency: 40 }, version: d.version });
+    expect(edited.status).toBe(200);
+    const after = await team.controls.get(`/api/revisions/${d.id}/region`);
+    expect(after.body.bounds).toEqual(JSON.parse(JSON.stringify(regionBounds({ ...LIMITS, maxNaturalFrequency: 40 }))));
+  });
+
+  it('When asked again with the ETag it gave, then 304 without a body; with another ETag, the full region', async () => {
+    const { set } = await freshSet();
+    const d = await draft(team, set.id, LIMITS);
+    const first = await team.controls.get(`/api/revisions/${d.id}/region`);
+    const etag = first.headers.get('etag');
+    expect(etag).toMatch(/^W\/"/);
+    // node:http, not fetch: fetch adds Cache-Control: no-cache to a conditional request, which asks for the full body.
+    const again = await new Promise<{ status: number; body: string }>((resolve, reject) => {
+      const req = httpGet(`${team.controls.baseUrl}/api/revisions/${d.id}/region`, { headers: { cookie: team.controls.cookieHeader, 'if-none-match': etag! } }, (res) => {
+        let body = '';
+        res.on('data', (chunk: Buffer) => (body += chunk.toString()));
+        res.on('end', () => resolve({ status: res.statusCode ?? 0, body }));
+      });
+      req.on('error', reject);
+    });
+    expect(again.status).toBe(304);
+    expect(again.body).toBe('');
+    const other = await team.controls.request('GET', `/api/revisions/${d.id}/region`, undefined, { headers: { 'if-none-match': 'W/"0-other"' } });
+    expect(other.status).toBe(200);
+    expect(other.body).toEqual(first.body);
   });
 });
 

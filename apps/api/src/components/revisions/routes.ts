@@ -64,7 +64,7 @@ export function revisionRoutes(): Router {
   router.get('/revisions/:id/region', requireRole(...ANY_ROLE), async (req, res) => {
     const id = parseId(req.params.id, REVISION);
     const viewport = validate(regionQuerySchema, req.query, 'invalid_query');
-    sendJson(req, res, await revisionRegion(id, viewport));
+    sendJson(res, await revisionRegion(id, viewport));
   });
 
   router.get('/revisions/:id/impact', requireRole(...ANY_ROLE), async (req, res) => {
