@@ -1,4 +1,5 @@
 import { dampingFromOvershoot } from './damping-from-overshoot.js';
+import { dropCollinear } from './drop-collinear.js';
 import { regionBounds, type RegionBounds } from './region-bounds.js';
 import type { Box, RadialBound } from './region-radial-interval.js';
 import { regionSweep, type SweepPoint } from './region-sweep.js';
@@ -64,9 +65,10 @@ function runPolygon(run: SweepPoint[], mirror: boolean): Complex[] {
     const last = out[out.length - 1];
     if (last === undefined || last.re !== p.re || last.im !== p.im) out.push(p);
   }
-  const first = out[0];
-  if (first !== undefined) out.push({ ...first });
-  return out;
+  const lean = dropCollinear(out);
+  const first = lean[0];
+  if (first !== undefined) lean.push({ ...first });
+  return lean;
 }
 
 // Liang-Barsky clipping of a polyline to the box; the inside parts are the pieces.
