@@ -20,6 +20,8 @@ import autocannon from 'autocannon';
 import { evaluate, regionBounds, regionPolygons } from '@polecourt/spec';
 
 const { values: args } = parseArgs({
+  // `pnpm bench:robustness -- --seconds 5` hands the `--` on: skip it.
+  args: process.argv.slice(2).filter((a) => a !== '--'),
   options: {
     seconds: { type: 'string', default: '20' },
     connections: { type: 'string', default: '100' },
