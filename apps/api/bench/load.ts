@@ -124,7 +124,7 @@ function run(opts: autocannon.Options): Promise<autocannon.Result> {
 function report(name: string, r: autocannon.Result): void {
   const errors = r.errors + r.timeouts + r.non2xx;
   console.log(
-    `${name}: ${r.requests.average.toFixed(0)} requests/s (total ${r.requests.total}), latency p50 ${r.latency.p50} ms, p99 ${r.latency.p99} ms, max ${r.latency.max} ms; ` +
+    `${name}: ${r.requests.average.toFixed(0)} requests/s (total ${r.requests.total}), latency p50 ${r.latency.p50} ms, p90 ${r.latency.p90} ms, p99 ${r.latency.p99} ms, max ${r.latency.max} ms; ` +
       `errors ${errors} (non-2xx ${r.non2xx}, socket errors ${r.errors}, timeouts ${r.timeouts})`,
   );
 }
