@@ -10,11 +10,13 @@ export interface UserRecord extends PublicUser {
   passwordHash: string | null;
 }
 
-function toRecord(row: UserModel | null): UserRecord | null {
+type UserRow = Pick<UserModel, 'id' | 'email' | 'name' | 'role' | 'passwordHash' | 'createdAt' | 'lastLoginAt'> & { active: boolean | number };
+
+function toRecord(row: UserModel | UserRow | null | undefined): UserRecord | null {
   if (!row) return null;
-  const u = row.get({ plain: true });
+  const u: UserRow = row instanceof UserModel ? row.get({ plain: true }) : row;
   return {
-    id: u.id,
+    id: Number(u.id),
     email: u.email,
     name: u.name,
     role: u.role,
@@ -25,37 +27,14 @@ function toRecord(row: UserModel | null): UserRecord | null {
   };
 }
 
-interface UserRow {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  active: number | boolean;
-  password_hash: string | null;
-  created_at: Date;
-  last_login_at: Date | null;
-}
-
 // Every request of a signed-in session loads its user: one plain query
 // rather than a model instance keeps that cheap.
-async function selectUser(where: string, value: unknown, transaction?: Transaction): Promise<UserRecord | null> {
-  const rows = await getSequelize().query<UserRow>(`SELECT id, email, name, role, active, password_hash, created_at, last_login_at FROM users WHERE ${where} = ?`, {
-    replacements: [value],
-    type: QueryTypes.SELECT,
-    transaction,
-  });
-  const u = rows[0];
-  if (!u) return null;
-  return {
-    id: Number(u.id),
-    email: u.email,
-    name: u.name,
-    role: u.role,
-    active: Boolean(u.active),
-    passwordHash: u.password_hash,
-    createdAt: new Date(u.created_at).toISOString(),
-    lastLoginAt: u.last_login_at ? new Date(u.last_login_at).toISOString() : null,
-  };
+async function selectUser(where: 'id' | 'email', value: unknown, transaction?: Transaction): Promise<UserRecord | null> {
+  const rows = await getSequelize().query<UserRow>(
+    `SELECT id, email, name, role, active, password_hash AS passwordHash, created_at AS createdAt, last_login_at AS lastLoginAt FROM users WHERE ${where} = ?`,
+    { replacements: [value], type: QueryTypes.SELECT, transaction },
+  );
+  return toRecord(rows[0]);
 }
 
 export function toPublicUser(u: UserRecord): PublicUser {
