@@ -32,18 +32,19 @@ export interface LeanSessionStoreOptions {
   readCacheMs?: number;
 }
 
-/** Sessions touched recently, per process; bounded so a flood of sessions cannot grow it. */
+/** Sessions remembered per process; bounded so a flood of sessions cannot grow memory. */
 const MAX_REMEMBERED = 50_000;
 
 export class LeanSessionStore extends SequelizeStore {
   private readonly db: Sequelize;
   private readonly table: string;
-  private readonly touchEveryMs: number;
-  private readonly lastTouch = new Map<string, number>();
+  private readonly expirationMs: number;
+  /** Sessions whose expiry was written within the last touchEveryMs. */
+  private readonly touched: LRUCache<string, true>;
   /** sid -> the stored JSON; parsed anew on each get, since express-session mutates what it gets. */
   private readonly recent: LRUCache<string, string>;
   /** sid -> sequence number of its last write or destroy: a read that began before it is not kept. */
-  private readonly lastWrite = new Map<string, number>();
+  private readonly lastWrite = new LRUCache<string, number>({ max: MAX_REMEMBERED });
   private seq = 0;
 
   constructor(options: LeanSessionStoreOptions) {
@@ -51,7 +52,8 @@ export class LeanSessionStore extends SequelizeStore {
     this.db = options.db;
     if (!/^[a-z_]+$/.test(options.tableName)) throw new Error(`session table name ${options.tableName} is not a plain name`);
     this.table = options.tableName;
-    this.touchEveryMs = options.touchEveryMs ?? 60_000;
+    this.expirationMs = options.expiration;
+    this.touched = new LRUCache<string, true>({ max: MAX_REMEMBERED, ttl: Math.max(1, options.touchEveryMs ?? 60_000) });
     this.recent = new LRUCache<string, string>({ max: MAX_REMEMBERED, ttl: Math.max(1, options.readCacheMs ?? 1000) });
   }
 
@@ -79,16 +81,15 @@ export class LeanSessionStore extends SequelizeStore {
 
   // The package's typings declare touch as a property, so it is one here too.
   override touch = (sid: string, data: SessionData, callback?: (err: unknown) => void): void => {
-    const now = Date.now();
-    const last = this.lastTouch.get(sid);
-    if (last !== undefined && now - last < this.touchEveryMs) {
+    if (this.touched.has(sid)) {
       callback?.(null);
       return;
     }
-    const expires = data.cookie?.expires ? new Date(data.cookie.expires) : new Date(now + this.expirationMs());
+    const now = Date.now();
+    const expires = data.cookie?.expires ? new Date(data.cookie.expires) : new Date(now + this.expirationMs);
     this.db.query(`UPDATE ${this.table} SET expires = ?, updated_at = ? WHERE sid = ?`, { replacements: [expires, new Date(now), sid], type: QueryTypes.UPDATE }).then(
       () => {
-        this.remember(sid, now);
+        this.touched.set(sid, true);
         callback?.(null);
       },
       (err: unknown) => callback?.(err),
@@ -97,7 +98,7 @@ export class LeanSessionStore extends SequelizeStore {
 
   override set(sid: string, data: SessionData, callback?: (err?: unknown) => void): void {
     // A written session has a fresh expiry, so it counts as touched now.
-    this.remember(sid, Date.now());
+    this.touched.set(sid, true);
     this.forget(sid);
     // Again once written: a read that began while the write was under way may have seen the old row.
     super.set(sid, data, (err?: unknown) => {
@@ -107,7 +108,7 @@ export class LeanSessionStore extends SequelizeStore {
   }
 
   override destroy(sid: string, callback?: (err?: unknown) => void): void {
-    this.lastTouch.delete(sid);
+    this.touched.delete(sid);
     this.forget(sid);
     super.destroy(sid, (err?: unknown) => {
       this.forget(sid);
@@ -117,24 +118,6 @@ export class LeanSessionStore extends SequelizeStore {
 
   private forget(sid: string): void {
     this.recent.delete(sid);
-    this.lastWrite.delete(sid);
     this.lastWrite.set(sid, ++this.seq);
-    if (this.lastWrite.size > MAX_REMEMBERED) {
-      const oldest = this.lastWrite.keys().next().value;
-      if (oldest !== undefined) this.lastWrite.delete(oldest);
-    }
-  }
-
-  private remember(sid: string, at: number): void {
-    this.lastTouch.delete(sid);
-    this.lastTouch.set(sid, at);
-    if (this.lastTouch.size > MAX_REMEMBERED) {
-      const oldest = this.lastTouch.keys().next().value;
-      if (oldest !== undefined) this.lastTouch.delete(oldest);
-    }
-  }
-
-  private expirationMs(): number {
-    return (this as unknown as { options: { expiration: number } }).options.expiration;
   }
 }

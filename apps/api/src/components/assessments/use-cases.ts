@@ -13,6 +13,7 @@ import { inTransaction } from '../../lib/transaction.js';
 import { recordAuditMany } from '../audit/record-audit.js';
 import { candidateRepository, type CandidateRecord } from '../candidates/repository.js';
 import { requirementSetRepository } from '../requirement-sets/repository.js';
+import { findRevisionKept } from '../revisions/kept-revision.js';
 import { revisionRepository, type RevisionRecord } from '../revisions/repository.js';
 import { noticeAssessmentNotCompliant } from '../workflow-notices/notices.js';
 import { assessmentRepository, type AssessmentRecord } from './repository.js';
@@ -35,13 +36,11 @@ async function toStored(records: AssessmentRecord[], t?: Transaction): Promise<S
 // ---- steps ------------------------------------------------------------------
 
 // Reads kept for the pipelines that assess the same candidates again and
-// again. Candidates and requirement sets are never changed once created (no
-// route edits them), nor is an approved revision's content; an approved
-// revision's status can still move on (retired), which is why it is checked
-// again under a lock in storeAssessments.
+// again: candidates and requirement sets are never changed once created (no
+// route edits them). Revisions come from revisions/kept-revision.ts; their
+// status is checked again under a lock in storeAssessments.
 const candidates = new LRUCache<number, CandidateRecord>({ max: 5_000 });
 const lineOfSet = new LRUCache<number, number>({ max: 5_000 });
-const approvedRevisions = new LRUCache<number, RevisionRecord>({ max: 5_000 });
 
 async function findCandidate(id: number): Promise<CandidateRecord> {
   const kept = candidates.get(id);
@@ -53,11 +52,7 @@ async function findCandidate(id: number): Promise<CandidateRecord> {
 }
 
 async function findRevisionInLine(revisionId: number, productLineId: number): Promise<RevisionRecord | null> {
-  let revision = approvedRevisions.get(revisionId) ?? null;
-  if (!revision) {
-    revision = await revisionRepository.findById(revisionId);
-    if (revision?.status === 'approved') approvedRevisions.set(revisionId, revision);
-  }
+  const revision = await findRevisionKept(revisionId);
   if (!revision) return null;
   let line = lineOfSet.get(revision.requirementSetId);
   if (line === undefined) {

@@ -9,7 +9,7 @@ export function recordAudit(
   actor: SessionUser | null,
   event: Omit<AuditEventInput, 'actor'>,
 ): Promise<unknown> {
-  return auditRepository.append({ ...event, actor: actor ? { id: actor.id, email: actor.email } : null }, transaction);
+  return recordAuditMany(transaction, [{ actor, event }]);
 }
 
 /** Several events of writes that commit together (a group commit), in order, under one lock of the chain's head. */

@@ -86,20 +86,13 @@ function whereOf(f: AuditFilter): WhereOptions {
 
 export const auditRepository = {
   /**
-   * Appends one event to the chain inside the caller's transaction, so the
-   * event lands if and only if the write it describes lands. The head row is
-   * locked FOR UPDATE: concurrent writers are put in line, never forked.
-   */
-  async append(input: AuditEventInput, transaction: Transaction): Promise<AuditEventRecord> {
-    return (await this.appendMany([input], transaction))[0]!;
-  },
-
-  /**
-   * Appends several events in order under one lock of the head: a batch of
-   * writes that commit together (see lib/group-commit.ts) queues once, not
-   * once per event. Plain queries, since every write of the app passes here
-   * while holding the lock: the less work between lock and commit, the
-   * shorter the line.
+   * Appends events, in order, to the chain inside the caller's transaction, so
+   * they land if and only if the writes they describe land. The head row is
+   * locked FOR UPDATE, once for all of them: concurrent writers are put in
+   * line, never forked, and a batch of writes that commit together (see
+   * lib/group-commit.ts) queues once. Plain queries, since every write of the
+   * app passes here while holding the lock: the less work between lock and
+   * commit, the shorter the line.
    */
   async appendMany(inputs: AuditEventInput[], transaction: Transaction): Promise<AuditEventRecord[]> {
     if (inputs.length === 0) return [];

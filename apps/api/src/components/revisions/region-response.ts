@@ -12,22 +12,6 @@ import { defaultViewport, mergeViewport } from './region-viewport.js';
 // serialised form beside it); entries are shared and never mutated.
 const cache = new LRUCache<string, RegionResponse>({ max: 500 });
 
-// Requirements of approved and retired revisions, by id: the database
-// freezes them (triggers refuse any change), so they can be kept for good.
-const frozen = new LRUCache<number, Record<string, number>>({ max: 5_000 });
-
-/** The revision's requirements, read by `read` unless the revision is known to be frozen. */
-export async function frozenRequirementsOr(
-  id: number,
-  read: () => Promise<{ status: string; requirements: Record<string, number> }>,
-): Promise<Record<string, number>> {
-  const hit = frozen.get(id);
-  if (hit) return hit;
-  const revision = await read();
-  if (revision.status === 'approved' || revision.status === 'retired') frozen.set(id, revision.requirements);
-  return revision.requirements;
-}
-
 export function regionResponse(revisionId: number, requirements: Record<string, number>, given: Partial<Viewport>): RegionResponse {
   const key = `${revisionId}|${JSON.stringify(requirements)}|${given.reMin}|${given.reMax}|${given.imMin}|${given.imMax}`;
   const hit = cache.get(key);

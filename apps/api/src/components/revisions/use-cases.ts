@@ -12,7 +12,8 @@ import { userRepository } from '../users/repository.js';
 import { noticeRevisionApproved, noticeRevisionSubmitted } from '../workflow-notices/notices.js';
 import { diffRequirements } from './diff.js';
 import { acknowledgement, computeImpact } from './impact.js';
-import { frozenRequirementsOr, regionResponse } from './region-response.js';
+import { findRevisionKept } from './kept-revision.js';
+import { regionResponse } from './region-response.js';
 import { revisionRepository, toRevision, type RevisionRecord } from './repository.js';
 import { requirementsSha256 } from './requirements-sha256.js';
 
@@ -26,10 +27,13 @@ async function lockRevision(id: number, t: Transaction): Promise<RevisionRecord>
   return revision;
 }
 
-async function findRevision(id: number): Promise<RevisionRecord> {
-  const revision = await revisionRepository.findById(id);
+function found(revision: RevisionRecord | null): RevisionRecord {
   if (!revision) throw AppError.notFound('That revision');
   return revision;
+}
+
+async function findRevision(id: number): Promise<RevisionRecord> {
+  return found(await revisionRepository.findById(id));
 }
 
 async function lockSetOf(revision: RevisionRecord, t: Transaction): Promise<RequirementSetRecord> {
@@ -218,7 +222,7 @@ export async function diffRevision(id: number, againstId: number | undefined): P
 }
 
 export async function revisionRegion(id: number, given: Partial<Viewport>): Promise<RegionResponse> {
-  return regionResponse(id, await frozenRequirementsOr(id, () => findRevision(id)), given);
+  return regionResponse(id, found(await findRevisionKept(id)).requirements, given);
 }
 
 export async function revisionImpact(id: number): Promise<RevisionImpact> {
