@@ -119,6 +119,23 @@ describe('POST /api/candidates/:id/assessments', () => {
     expect((await team.controls.post('/api/candidates/999999/assessments', {})).status).toBe(404);
     expect((await new TestClient(url).post('/api/candidates/1/assessments', {})).status).toBe(401);
   });
+
+  it('When 40 assessments arrive at once (stored together in one commit), then each answer names its own row and its own audit event, and the chain stays intact', async () => {
+    const { revision, candidate } = await lineWithApproved();
+    const answers = await Promise.all(Array.from({ length: 40 }, () => team.controls.post(`/api/candidates/${candidate.id}/assessments`, { revisionId: revision.id })));
+    expect(answers.map((a) => a.status)).toEqual(Array(40).fill(201));
+    const ids = answers.map((a) => a.body.id as number);
+    expect(new Set(ids).size).toBe(40);
+    for (const a of answers) {
+      const back = await team.auditor.get(`/api/assessments/${a.body.id}`);
+      expect(back.body).toEqual(a.body);
+      const audit = await team.admin.get(`/api/audit-events?entityType=assessment&entityId=${a.body.id}`);
+      expect(audit.body.items).toHaveLength(1);
+      expect(audit.body.items[0].after).toMatchObject({ id: a.body.id, candidateId: candidate.id, revisionId: revision.id });
+    }
+    expect((await team.auditor.get(`/api/candidates/${candidate.id}/assessments?limit=100`)).body.total).toBe(40);
+    expect((await team.auditor.get('/api/audit-events/verify')).body.intact).toBe(true);
+  });
 });
 
 describe('GET /api/candidates/:id/assessments and GET /api/assessments/:id', () => {

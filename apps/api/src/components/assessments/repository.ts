@@ -75,16 +75,24 @@ export interface NewAssessment {
 
 export const assessmentRepository = {
   async create(data: NewAssessment & { createdAt?: Date }, transaction: Transaction): Promise<number> {
-    const [id] = await getSequelize().query(
+    const [id] = await assessmentRepository.createMany([data], transaction);
+    return id!;
+  },
+  /**
+   * Several assessments in one statement (one round trip, where a loop of
+   * single inserts pays one per row); the ids come back in the order given.
+   */
+  async createMany(rows: (NewAssessment & { createdAt?: Date })[], transaction: Transaction): Promise<number[]> {
+    if (rows.length === 0) return [];
+    const now = new Date();
+    const replacements = rows.flatMap((d) => [d.candidateId, d.revisionId, d.revisionSha256, d.engineVersion, d.verdict, JSON.stringify(d.result), d.createdBy, d.createdAt ?? now]);
+    const inserted = await getSequelize().query<{ id: number }>(
       `INSERT INTO assessments (candidate_id, revision_id, revision_sha256, engine_version, verdict, result_json, created_by, created_at)
-       VALUES (?, ?, ?, ?, ?, ?, ?, ?)`,
-      {
-        replacements: [data.candidateId, data.revisionId, data.revisionSha256, data.engineVersion, data.verdict, JSON.stringify(data.result), data.createdBy, data.createdAt ?? new Date()],
-        type: QueryTypes.INSERT,
-        transaction,
-      },
+       VALUES ${rows.map(() => '(?, ?, ?, ?, ?, ?, ?, ?)').join(', ')} RETURNING id`,
+      { replacements, type: QueryTypes.SELECT, transaction },
     );
-    return Number(id);
+    if (inserted.length !== rows.length) throw new Error(`inserted ${inserted.length} assessments of ${rows.length}`);
+    return inserted.map((r) => Number(r.id));
   },
   async findById(id: number, transaction?: Transaction): Promise<AssessmentRecord | null> {
     const rows = await getSequelize().query<AssessmentRow>(`${SELECT_WITH_STATUS} WHERE a.id = ?`, { replacements: [id], type: QueryTypes.SELECT, transaction });

@@ -16,7 +16,7 @@ import { requirementSetRepository } from '../requirement-sets/repository.js';
 import { findRevisionKept } from '../revisions/kept-revision.js';
 import { revisionRepository, type RevisionRecord } from '../revisions/repository.js';
 import { noticeAssessmentNotCompliant } from '../workflow-notices/notices.js';
-import { assessmentRepository, type AssessmentRecord } from './repository.js';
+import { assessmentRepository, type AssessmentRecord, type NewAssessment } from './repository.js';
 
 async function toStored(records: AssessmentRecord[], t?: Transaction): Promise<StoredAssessment[]> {
   const people = await personRefs(records.map((r) => r.createdBy), t);
@@ -118,19 +118,17 @@ async function storeAssessments(jobs: AssessmentJob[], t: Transaction): Promise<
   // A shared lock on each revision: it cannot be retired while these assessments are stored.
   const revisions = new Map<number, RevisionRecord>();
   for (const id of new Set(jobs.map((j) => j.revisionId))) revisions.set(id, (await revisionRepository.lockShared(id, t))!);
-  const outcomes: (StoredAssessment | Error)[] = [];
-  const events: Parameters<typeof recordAuditMany>[1] = [];
-  const notices: { assessmentId: number; job: AssessmentJob; revision: RevisionRecord }[] = [];
-  for (const job of jobs) {
+  const outcomes: (StoredAssessment | Error)[] = new Array(jobs.length);
+  const accepted: { index: number; job: AssessmentJob; revision: RevisionRecord; stored: NewAssessment & { createdAt: Date } }[] = [];
+  jobs.forEach((job, index) => {
     const revision = revisions.get(job.revisionId)!;
     try {
       assertApproved(revision);
     } catch (e) {
-      outcomes.push(e as Error);
-      continue;
+      outcomes[index] = e as Error;
+      return;
     }
     const { actor, candidate, result } = job;
-    const createdAt = new Date();
     const stored = {
       candidateId: candidate.id,
       revisionId: revision.id,
@@ -139,12 +137,22 @@ async function storeAssessments(jobs: AssessmentJob[], t: Transaction): Promise<
       verdict: result.verdict ?? 'noncompliant',
       result,
       createdBy: actor.id,
+      createdAt: new Date(),
     };
-    const id = await assessmentRepository.create({ ...stored, createdAt }, t);
-    events.push({ actor, event: { action: 'assessment.create', entityType: 'assessment', entityId: id, productLineId: candidate.productLineId, after: { id, ...stored } } });
+    accepted.push({ index, job, revision, stored });
+  });
+  // One insert for the whole batch.
+  const ids = await assessmentRepository.createMany(accepted.map((a) => a.stored), t);
+  const events: Parameters<typeof recordAuditMany>[1] = [];
+  const notices: { assessmentId: number; job: AssessmentJob; revision: RevisionRecord }[] = [];
+  accepted.forEach(({ index, job, revision, stored }, k) => {
+    const id = ids[k]!;
+    const { actor, candidate, result } = job;
+    const { createdAt, ...recorded } = stored;
+    events.push({ actor, event: { action: 'assessment.create', entityType: 'assessment', entityId: id, productLineId: candidate.productLineId, after: { id, ...recorded } } });
     if (stored.verdict === 'noncompliant') notices.push({ assessmentId: id, job, revision });
     // What was just written, as getAssessment would read it back, without reading it back.
-    outcomes.push({
+    outcomes[index] = {
       id,
       candidateId: candidate.id,
       revisionId: revision.id,
@@ -154,8 +162,8 @@ async function storeAssessments(jobs: AssessmentJob[], t: Transaction): Promise<
       createdBy: { id: actor.id, name: actor.name, email: actor.email },
       revisionStatus: revision.status,
       result: result as unknown as StoredAssessment['result'],
-    });
-  }
+    };
+  });
   await recordAuditMany(t, events);
   for (const n of notices) {
     await noticeAssessmentNotCompliant(t, { assessmentId: n.assessmentId, candidate: n.job.candidate, revision: n.revision, result: n.job.result });

@@ -84,6 +84,8 @@ function whereOf(f: AuditFilter): WhereOptions {
   return where as WhereOptions;
 }
 
+const INSERT_CHUNK = 200;
+
 export const auditRepository = {
   /**
    * Appends events, in order, to the chain inside the caller's transaction, so
@@ -99,10 +101,9 @@ export const auditRepository = {
     const sequelize = getSequelize();
     const [head] = await sequelize.query<{ last_hash: string }>('SELECT last_hash FROM audit_head WHERE id = 1 FOR UPDATE', { type: QueryTypes.SELECT, transaction });
     if (!head) throw new Error('audit_head row is missing; run the migrations');
+    // Hashes first (each link needs the one before), then one insert for all of them.
     let prevHash = head.last_hash;
-    let lastId = 0;
-    const out: AuditEventRecord[] = [];
-    for (const input of inputs) {
+    const links = inputs.map((input) => {
       const occurredAt = new Date();
       const fields = {
         occurredAt: occurredAt.toISOString(),
@@ -115,33 +116,41 @@ export const auditRepository = {
         beforeJson: input.before === undefined || input.before === null ? null : canonicalJson(input.before),
         afterJson: input.after === undefined || input.after === null ? null : canonicalJson(input.after),
       };
-      const hash = chainHash(prevHash, fields);
-      const [id] = await sequelize.query(
+      const link = { input, occurredAt, fields, prevHash, hash: chainHash(prevHash, fields) };
+      prevHash = link.hash;
+      return link;
+    });
+    // Statements of at most INSERT_CHUNK rows keep a large batch (an upload) well under the server's packet limit.
+    const inserted: { id: number }[] = [];
+    for (let from = 0; from < links.length; from += INSERT_CHUNK) {
+      const chunk = links.slice(from, from + INSERT_CHUNK);
+      const rows = await sequelize.query<{ id: number }>(
         `INSERT INTO audit_events (occurred_at, actor_id, actor_email, action, entity_type, entity_id, product_line_id, before_json, after_json, prev_hash, hash)
-         VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)`,
+         VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')} RETURNING id`,
         {
-          replacements: [occurredAt, fields.actorId, fields.actorEmail, fields.action, fields.entityType, fields.entityId, fields.productLineId, fields.beforeJson, fields.afterJson, prevHash, hash],
-          type: QueryTypes.INSERT,
+          replacements: chunk.flatMap(({ occurredAt, fields: f, prevHash: prev, hash }) => [occurredAt, f.actorId, f.actorEmail, f.action, f.entityType, f.entityId, f.productLineId, f.beforeJson, f.afterJson, prev, hash]),
+          type: QueryTypes.SELECT,
           transaction,
         },
       );
-      lastId = Number(id);
-      out.push({
-        id: lastId,
-        occurredAt: fields.occurredAt,
-        actorId: fields.actorId,
-        actorEmail: fields.actorEmail,
-        action: fields.action,
-        entityType: fields.entityType,
-        entityId: fields.entityId,
-        productLineId: fields.productLineId,
-        before: input.before ?? null,
-        after: input.after ?? null,
-        prevHash,
-        hash,
-      });
-      prevHash = hash;
+      inserted.push(...rows);
     }
+    if (inserted.length !== links.length) throw new Error(`inserted ${inserted.length} audit events of ${links.length}`);
+    const out: AuditEventRecord[] = links.map(({ input, fields, prevHash: prev, hash }, i) => ({
+      id: Number(inserted[i]!.id),
+      occurredAt: fields.occurredAt,
+      actorId: fields.actorId,
+      actorEmail: fields.actorEmail,
+      action: fields.action,
+      entityType: fields.entityType,
+      entityId: fields.entityId,
+      productLineId: fields.productLineId,
+      before: input.before ?? null,
+      after: input.after ?? null,
+      prevHash: prev,
+      hash,
+    }));
+    const lastId = out[out.length - 1]!.id;
     await sequelize.query('UPDATE audit_head SET last_id = ?, last_hash = ? WHERE id = 1', { replacements: [lastId, prevHash], type: QueryTypes.UPDATE, transaction });
     return out;
   },
