@@ -1,16 +1,22 @@
 // Load figures for two hot routes, over loopback, bounded in time: prints
 // requests/s, p50, p99 and errors, and the machine's load average; asserts
 // nothing. The API runs as a child process (node --import tsx src/main.ts) so
-// the load generator (autocannon) does not share its event loop.
+// the load generator does not share its event loop. The load comes from wrk
+// (Debian's package, written in C: on a two-core machine it leaves the API
+// most of a core that autocannon, itself a Node process, would take) when it
+// is installed, else from autocannon; --tool picks one.
 //
 //   pnpm --filter @polecourt/api bench:load [--seconds 20] [--connections 100] [--auth session|token]
-//     [--routes region,assessments] [--warmup 3] [--profile DIR]
+//     [--routes region,assessments] [--warmup 3] [--profile DIR] [--tool wrk|autocannon] [--processes N]
+//
+// --processes sets API_PROCESSES (default: one per core, the way to run on a
+// machine of its own; see the README's "Scale beyond one machine").
 //
 // Without DB_* in the environment it uses the test instance that `npm test`
 // prepares (.data/test, 127.0.0.1:3408, database polecourt_test): run it with
 // that instance up (POLECOURT_KEEP_TEST_DB=1 npm test -- api, or any run in progress).
-import { spawn, type ChildProcess } from 'node:child_process';
-import { existsSync, readFileSync } from 'node:fs';
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
@@ -32,6 +38,10 @@ const { values: args } = parseArgs({
     routes: { type: 'string', default: 'region,assessments' },
     // Seconds of load before each measured run, not counted: a server that has run a while has its code compiled.
     warmup: { type: 'string', default: '3' },
+    // The load generator: wrk when installed (apt-get install wrk), else autocannon.
+    tool: { type: 'string' },
+    // API processes (API_PROCESSES); default one per core.
+    processes: { type: 'string' },
   },
 });
 const SECONDS = Number(args.seconds);
@@ -39,6 +49,10 @@ const CONNECTIONS = Number(args.connections);
 const AUTH = args.auth === 'token' ? 'token' : 'session';
 const ROUTES = new Set(args.routes.split(','));
 const WARMUP = Number(args.warmup);
+const PROCESSES = Number(args.processes ?? os.availableParallelism());
+const HAS_WRK = spawnSync('wrk', ['--version']).error === undefined;
+const TOOL = args.tool === 'autocannon' || (args.tool === undefined && !HAS_WRK) ? 'autocannon' : 'wrk';
+if (TOOL === 'wrk' && !HAS_WRK) throw new Error('--tool wrk: wrk is not installed (apt-get install wrk)');
 const API_DIR = path.resolve(import.meta.dirname, '..');
 const ROOT = path.resolve(API_DIR, '../..');
 
@@ -56,7 +70,7 @@ function startApi(): Promise<{ child: ChildProcess; url: string }> {
     const child = spawn(process.execPath, [...prof, '--import', 'tsx', 'src/main.ts'], {
       cwd: API_DIR,
       // Sign-in limits lifted: other runs on the same database may have left failed sign-ins of the demo accounts.
-      env: { ...apiEnv(), PORT: '0', SMTP_PORT: '0', S3_PORT: '0', LOG_LEVEL: 'info', NODE_ENV: 'development', MAIL_POLL_MS: '600000', LOGIN_MAX_FAILURES: '10000', LOGIN_MAX_FAILURES_PER_ADDRESS: '100000' },
+      env: { ...apiEnv(), API_PROCESSES: String(PROCESSES), PORT: '0', SMTP_PORT: '0', S3_PORT: '0', LOG_LEVEL: 'info', NODE_ENV: 'development', MAIL_POLL_MS: '600000', LOGIN_MAX_FAILURES: '10000', LOGIN_MAX_FAILURES_PER_ADDRESS: '100000' },
       stdio: ['ignore', 'pipe', 'pipe'],
     });
     let out = '';
@@ -115,24 +129,109 @@ function engineCost(): { evaluateMs: number; regionMs: number } {
   };
 }
 
-function run(opts: autocannon.Options): Promise<autocannon.Result> {
+/** One load run's figures, whichever tool made them. */
+interface LoadResult {
+  requestsPerSecond: number;
+  total: number;
+  p50: number;
+  p90: number;
+  p99: number;
+  max: number;
+  non2xx: number;
+  socketErrors: number;
+  timeouts: number;
+}
+
+interface LoadOptions {
+  url: string;
+  method?: 'GET' | 'POST';
+  headers: Record<string, string>;
+  body?: string;
+  connections: number;
+  duration: number;
+}
+
+function runAutocannon(opts: LoadOptions): Promise<LoadResult> {
   return new Promise((resolve, reject) => {
-    autocannon(opts, (err, result) => (err ? reject(err) : resolve(result)));
+    autocannon(opts, (err, r) => {
+      if (err) return reject(err);
+      resolve({
+        requestsPerSecond: r.requests.average,
+        total: r.requests.total,
+        p50: r.latency.p50,
+        p90: r.latency.p90,
+        p99: r.latency.p99,
+        max: r.latency.max,
+        non2xx: r.non2xx,
+        socketErrors: r.errors,
+        timeouts: r.timeouts,
+      });
+    });
   });
 }
 
-function report(name: string, r: autocannon.Result): void {
-  const errors = r.errors + r.timeouts + r.non2xx;
+// A Lua string in long brackets, which need no escaping inside.
+const lua = (s: string) => `[==[${s}]==]`;
+
+/** wrk with one thread; a Lua script sets method, headers and body and prints the figures as JSON at the end. */
+function runWrk(opts: LoadOptions): Promise<LoadResult> {
+  const dir = mkdtempSync(path.join(os.tmpdir(), 'polecourt-wrk-'));
+  const script = path.join(dir, 'load.lua');
+  writeFileSync(
+    script,
+    [
+      `wrk.method = ${lua(opts.method ?? 'GET')}`,
+      ...(opts.body === undefined ? [] : [`wrk.body = ${lua(opts.body)}`]),
+      ...Object.entries(opts.headers).map(([k, v]) => `wrk.headers[ ${lua(k)} ] = ${lua(v)}`),
+      'done = function(s, latency, requests)',
+      '  local e = s.errors',
+      '  io.write(string.format(\'\\nFIGURES {"requests":%d,"seconds":%f,"p50":%f,"p90":%f,"p99":%f,"max":%f,"status":%d,"connect":%d,"read":%d,"write":%d,"timeout":%d}\\n\',',
+      '    s.requests, s.duration / 1e6, latency:percentile(50) / 1e3, latency:percentile(90) / 1e3, latency:percentile(99) / 1e3, latency.max / 1e3,',
+      '    e.status, e.connect, e.read, e.write, e.timeout))',
+      'end',
+    ].join('\n'),
+  );
+  return new Promise((resolve, reject) => {
+    const child = spawn('wrk', ['-t1', `-c${opts.connections}`, `-d${opts.duration}s`, '--timeout', '10s', '-s', script, opts.url], { stdio: ['ignore', 'pipe', 'pipe'] });
+    let out = '';
+    child.stdout.on('data', (d: Buffer) => (out += d.toString()));
+    child.stderr.on('data', (d: Buffer) => (out += d.toString()));
+    child.once('error', reject);
+    child.once('exit', () => {
+      rmSync(dir, { recursive: true, force: true });
+      const m = /FIGURES (\{.*\})/.exec(out);
+      if (!m) return reject(new Error(`wrk printed no figures:\n${out}`));
+      const f = JSON.parse(m[1]!) as Record<string, number>;
+      const round = (ms: number) => Math.round(ms * 10) / 10;
+      resolve({
+        requestsPerSecond: f.requests! / f.seconds!,
+        total: f.requests!,
+        p50: round(f.p50!),
+        p90: round(f.p90!),
+        p99: round(f.p99!),
+        max: round(f.max!),
+        non2xx: f.status!,
+        socketErrors: f.connect! + f.read! + f.write!,
+        timeouts: f.timeout!,
+      });
+    });
+  });
+}
+
+const run = (opts: LoadOptions) => (TOOL === 'wrk' ? runWrk(opts) : runAutocannon(opts));
+
+function report(name: string, r: LoadResult): void {
+  const errors = r.socketErrors + r.timeouts + r.non2xx;
   console.log(
-    `${name}: ${r.requests.average.toFixed(0)} requests/s (total ${r.requests.total}), latency p50 ${r.latency.p50} ms, p90 ${r.latency.p90} ms, p99 ${r.latency.p99} ms, max ${r.latency.max} ms; ` +
-      `errors ${errors} (non-2xx ${r.non2xx}, socket errors ${r.errors}, timeouts ${r.timeouts})`,
+    `${name}: ${r.requestsPerSecond.toFixed(0)} requests/s (total ${r.total}), latency p50 ${r.p50} ms, p90 ${r.p90} ms, p99 ${r.p99} ms, max ${r.max} ms; ` +
+      `errors ${errors} (non-2xx ${r.non2xx}, socket errors ${r.socketErrors}, timeouts ${r.timeouts})`,
   );
 }
 
 const load = () => os.loadavg().map((v) => v.toFixed(2)).join(' ');
 
 async function main(): Promise<void> {
-  console.log(`load bench: ${CONNECTIONS} connections, ${SECONDS} s per route, auth by ${AUTH}, ${os.cpus().length} cores, load average before: ${load()}`);
+  console.log(`load bench: ${TOOL}, ${CONNECTIONS} connections, ${PROCESSES} API process${PROCESSES === 1 ? '' : 'es'}, ${SECONDS} s per route, auth by ${AUTH}, ${os.cpus().length} cores, load average before: ${load()}`);
   const cost = engineCost();
   console.log(`engine alone on one thread: evaluate ${cost.evaluateMs.toFixed(3)} ms per call, region polygons ${cost.regionMs.toFixed(3)} ms per call`);
   const { child, url } = await startApi();
@@ -163,7 +262,7 @@ async function main(): Promise<void> {
       headers: { ...headers, 'content-type': 'application/json' },
       body: JSON.stringify({ revisionId: rev.id }),
     };
-    const measured: { name: string; target: number; result: autocannon.Result }[] = [];
+    const measured: { name: string; target: number; result: LoadResult }[] = [];
     for (const [key, name, opts, target] of [
       ['region', 'GET /api/revisions/:id/region', regionOpts, 50],
       ['assessments', 'POST /api/candidates/:id/assessments', assessOpts, 100],
@@ -175,8 +274,8 @@ async function main(): Promise<void> {
       measured.push({ name, target, result });
     }
     if (WARMUP > 0) console.log(`(each route had ${WARMUP} s of the same load first, not counted)`);
-    const verdicts = measured.map(({ name, target, result }) => `${name.split(' ')[0]} ${name.includes('region') ? 'region' : 'assessments'} p99 < ${target} ms (${result.latency.p99 < target ? 'met' : 'NOT met'})`);
-    const errors = measured.reduce((n, m) => n + m.result.errors + m.result.non2xx + m.result.timeouts, 0);
+    const verdicts = measured.map(({ name, target, result }) => `${name.split(' ')[0]} ${name.includes('region') ? 'region' : 'assessments'} p99 < ${target} ms (${result.p99 < target ? 'met' : 'NOT met'})`);
+    const errors = measured.reduce((n, m) => n + m.result.socketErrors + m.result.non2xx + m.result.timeouts, 0);
     console.log(`targets: ${verdicts.join(', ')}, zero errors (${errors === 0 ? 'met' : 'NOT met'})`);
     console.log(`load average after: ${load()} (the machine is shared: other work shows in these figures)`);
   } finally {

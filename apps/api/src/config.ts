@@ -12,6 +12,10 @@ const envSchema = z.object({
   DB_USER: z.string().min(1).default('polecourt'),
   DB_PASSWORD: z.string().min(1, 'set by the start script; see README'),
   DB_POOL_MAX: z.coerce.number().int().min(1).max(100).default(10),
+  // API processes on this machine (node:cluster): 1 serves from one process; more
+  // fork that many HTTP processes sharing PORT, with the mail fake, the mail
+  // sender and the object-storage fake run once, in the parent.
+  API_PROCESSES: z.coerce.number().int().min(1).max(64).default(1),
   SESSION_SECRET: z.string().min(32, 'must be at least 32 characters'),
   SESSION_MAX_AGE_HOURS: z.coerce.number().positive().max(24 * 30).default(8),
   COOKIE_SECURE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),

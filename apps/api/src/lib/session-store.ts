@@ -13,7 +13,8 @@ import { QueryTypes, type Sequelize } from 'sequelize';
  * new or changed session (set) and destroying one stay the package's.
  *
  * A read is kept for `readCacheMs` (1 s by default): a busy client's burst of
- * requests reads its session once. Writing or destroying a session in this
+ * requests reads its session once, and concurrent reads of one session share
+ * one query. Writing or destroying a session in this
  * process drops the kept copy at once; another API process sees a sign-out
  * within that second.
  *
@@ -45,6 +46,8 @@ export class LeanSessionStore extends SequelizeStore {
   private readonly recent: LRUCache<string, string>;
   /** sid -> sequence number of its last write or destroy: a read that began before it is not kept. */
   private readonly lastWrite = new LRUCache<string, number>({ max: MAX_REMEMBERED });
+  /** sid -> the read under way; a write or destroy drops it, so a later get reads anew. */
+  private readonly reading = new Map<string, Promise<string | null>>();
   private seq = 0;
 
   constructor(options: LeanSessionStoreOptions) {
@@ -63,20 +66,30 @@ export class LeanSessionStore extends SequelizeStore {
       callback(null, JSON.parse(kept) as SessionData);
       return;
     }
-    const began = ++this.seq;
-    this.db
-      .query<{ data: string | null }>(`SELECT data FROM ${this.table} WHERE sid = ? AND (expires IS NULL OR expires > ?)`, {
-        replacements: [sid, new Date()],
-        type: QueryTypes.SELECT,
-      })
-      .then(
-        (rows) => {
-          const data = rows[0]?.data;
+    // One read per session at a time: when the kept copy runs out under load,
+    // the requests in flight for that session wait on one query, not one each.
+    let read = this.reading.get(sid);
+    if (!read) {
+      const began = ++this.seq;
+      read = this.db
+        .query<{ data: string | null }>(`SELECT data FROM ${this.table} WHERE sid = ? AND (expires IS NULL OR expires > ?)`, {
+          replacements: [sid, new Date()],
+          type: QueryTypes.SELECT,
+        })
+        .then((rows) => {
+          const data = rows[0]?.data ?? null;
           if (data && (this.lastWrite.get(sid) ?? 0) < began) this.recent.set(sid, data);
-          callback(null, data ? (JSON.parse(data) as SessionData) : null);
-        },
-        (err: unknown) => callback(err),
-      );
+          return data;
+        })
+        .finally(() => {
+          if (this.reading.get(sid) === read) this.reading.delete(sid);
+        });
+      this.reading.set(sid, read);
+    }
+    read.then(
+      (data) => callback(null, data ? (JSON.parse(data) as SessionData) : null),
+      (err: unknown) => callback(err),
+    );
   }
 
   // The package's typings declare touch as a property, so it is one here too.
@@ -118,6 +131,7 @@ export class LeanSessionStore extends SequelizeStore {
 
   private forget(sid: string): void {
     this.recent.delete(sid);
+    this.reading.delete(sid);
     this.lastWrite.set(sid, ++this.seq);
   }
 }

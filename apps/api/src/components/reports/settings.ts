@@ -20,7 +20,7 @@ export interface ReportSettings {
 }
 
 // s3rver's built-in account: any other key is refused by the fake.
-const FAKE_KEY = 'S3RVER';
+export const FAKE_KEY = 'S3RVER';
 
 /** The report settings with their environment-dependent defaults filled in. */
 export function reportSettings(config: Config): ReportSettings {

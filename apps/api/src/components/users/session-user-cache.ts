@@ -9,18 +9,32 @@ import type { UserRecord } from './repository.js';
 // later and other API processes keep theirs: a deactivation or a new role
 // takes effect everywhere within about a second.
 const kept = new LRUCache<number, { user: SessionUser | null }>({ max: 10_000, ttl: 1000 });
+// Concurrent requests of one user share one read when the kept copy has run out.
+const loading = new Map<number, Promise<SessionUser | null>>();
 
 /** The active user with this id, or null (unknown or deactivated). */
-export async function sessionUser(id: number, load: (id: number) => Promise<UserRecord | null>): Promise<SessionUser | null> {
+export function sessionUser(id: number, load: (id: number) => Promise<UserRecord | null>): Promise<SessionUser | null> {
   const hit = kept.get(id);
-  if (hit) return hit.user;
-  const u = await load(id);
-  const user = u && u.active ? { id: u.id, email: u.email, name: u.name, role: u.role } : null;
-  kept.set(id, { user });
-  return user;
+  if (hit) return Promise.resolve(hit.user);
+  let read = loading.get(id);
+  if (!read) {
+    read = load(id)
+      .then((u) => {
+        const user = u && u.active ? { id: u.id, email: u.email, name: u.name, role: u.role } : null;
+        // Not kept if the account changed meanwhile (forgetSessionUser dropped this read).
+        if (loading.get(id) === read) kept.set(id, { user });
+        return user;
+      })
+      .finally(() => {
+        if (loading.get(id) === read) loading.delete(id);
+      });
+    loading.set(id, read);
+  }
+  return read;
 }
 
 /** Called on every change to an account (role, active, name, password). */
 export function forgetSessionUser(id: number): void {
   kept.delete(id);
+  loading.delete(id);
 }
