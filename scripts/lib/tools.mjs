@@ -1,5 +1,6 @@
 // Installs what a fresh Debian machine lacks: pnpm (via npm), the workspace's
-// packages, and Debian packages (MariaDB; for tests Chromium and poppler-utils).
+// packages, and Debian packages (MariaDB; for tests Chromium and poppler-utils,
+// and wrk, the load generator of `pnpm bench:robustness`).
 import { existsSync } from 'node:fs';
 
 import { capture, has, run, step } from './run.mjs';
@@ -38,5 +39,6 @@ export function ensureDebianTools({ forTests }) {
   if (!has('mariadbd') && !existsSync('/usr/sbin/mariadbd')) missing.push('mariadb-server');
   if (!has('pdfsig')) missing.push('poppler-utils');
   if (forTests && !existsSync('/usr/bin/chromium')) missing.push('chromium');
+  if (forTests && !has('wrk')) missing.push('wrk');
   if (missing.length) aptInstall(missing);
 }
