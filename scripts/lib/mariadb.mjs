@@ -72,7 +72,11 @@ export async function startMariadb(inst) {
       '--skip-name-resolve',
       '--character-set-server=utf8mb4',
       '--collation-server=utf8mb4_unicode_ci',
-      '--innodb-buffer-pool-size=128M',
+      // Room for the working set, and a redo log that a burst of assessment and
+      // audit writes (about 10 KB each with their JSON) does not wrap within
+      // seconds: a small log makes InnoDB stall writes to flush pages early.
+      '--innodb-buffer-pool-size=512M',
+      '--innodb-log-file-size=512M',
       '--max-connections=300',
       '--default-time-zone=+00:00',
     ],
