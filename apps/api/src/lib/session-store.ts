@@ -3,6 +3,8 @@ import session, { type SessionData } from 'express-session';
 import LRUCache from 'lru-cache';
 import { QueryTypes, type Sequelize } from 'sequelize';
 
+import { KeptReads } from './kept-reads.js';
+
 /**
  * connect-session-sequelize with its two per-request calls made lean: every
  * request reads its session (get) and, with a rolling cookie, extends it
@@ -12,11 +14,11 @@ import { QueryTypes, type Sequelize } from 'sequelize';
  * moving an expiry of hours by a few seconds is not worth a write. Writing a
  * new or changed session (set) and destroying one stay the package's.
  *
- * A read is kept for `readCacheMs` (1 s by default): a busy client's burst of
- * requests reads its session once, and concurrent reads of one session share
- * one query. Writing or destroying a session in this
- * process drops the kept copy at once; another API process sees a sign-out
- * within that second.
+ * A read is kept for `readCacheMs` (1 s by default, lib/kept-reads.ts): a busy
+ * client's burst of requests reads its session once, and concurrent reads of
+ * one session share one query. Writing or destroying a session in this
+ * process drops the kept copy (and a read under way) at once; another API
+ * process sees a sign-out within that second.
  *
  * get() also refuses a row past its expiry: the package leaves that to its
  * clean-up timer, so a copied cookie would otherwise outlive its session by
@@ -42,13 +44,8 @@ export class LeanSessionStore extends SequelizeStore {
   private readonly expirationMs: number;
   /** Sessions whose expiry was written within the last touchEveryMs. */
   private readonly touched: LRUCache<string, true>;
-  /** sid -> the stored JSON; parsed anew on each get, since express-session mutates what it gets. */
-  private readonly recent: LRUCache<string, string>;
-  /** sid -> sequence number of its last write or destroy: a read that began before it is not kept. */
-  private readonly lastWrite = new LRUCache<string, number>({ max: MAX_REMEMBERED });
-  /** sid -> the read under way; a write or destroy drops it, so a later get reads anew. */
-  private readonly reading = new Map<string, Promise<string | null>>();
-  private seq = 0;
+  /** sid -> the stored JSON (null: no such session); a write or destroy forgets it. */
+  private readonly recent: KeptReads<string, string | null>;
 
   constructor(options: LeanSessionStoreOptions) {
     super(options);
@@ -57,39 +54,24 @@ export class LeanSessionStore extends SequelizeStore {
     this.table = options.tableName;
     this.expirationMs = options.expiration;
     this.touched = new LRUCache<string, true>({ max: MAX_REMEMBERED, ttl: Math.max(1, options.touchEveryMs ?? 60_000) });
-    this.recent = new LRUCache<string, string>({ max: MAX_REMEMBERED, ttl: Math.max(1, options.readCacheMs ?? 1000) });
+    this.recent = new KeptReads<string, string | null>({ max: MAX_REMEMBERED, ttlMs: options.readCacheMs ?? 1000 });
   }
 
   override get(sid: string, callback: (err: unknown, session?: SessionData | null) => void): void {
-    const kept = this.recent.get(sid);
-    if (kept !== undefined) {
-      callback(null, JSON.parse(kept) as SessionData);
-      return;
-    }
-    // One read per session at a time: when the kept copy runs out under load,
-    // the requests in flight for that session wait on one query, not one each.
-    let read = this.reading.get(sid);
-    if (!read) {
-      const began = ++this.seq;
-      read = this.db
-        .query<{ data: string | null }>(`SELECT data FROM ${this.table} WHERE sid = ? AND (expires IS NULL OR expires > ?)`, {
-          replacements: [sid, new Date()],
-          type: QueryTypes.SELECT,
-        })
-        .then((rows) => {
-          const data = rows[0]?.data ?? null;
-          if (data && (this.lastWrite.get(sid) ?? 0) < began) this.recent.set(sid, data);
-          return data;
-        })
-        .finally(() => {
-          if (this.reading.get(sid) === read) this.reading.delete(sid);
-        });
-      this.reading.set(sid, read);
-    }
-    read.then(
-      (data) => callback(null, data ? (JSON.parse(data) as SessionData) : null),
-      (err: unknown) => callback(err),
-    );
+    this.recent
+      .get(sid, () =>
+        this.db
+          .query<{ data: string | null }>(`SELECT data FROM ${this.table} WHERE sid = ? AND (expires IS NULL OR expires > ?)`, {
+            replacements: [sid, new Date()],
+            type: QueryTypes.SELECT,
+          })
+          .then((rows) => rows[0]?.data ?? null),
+      )
+      .then(
+        // parsed anew for each caller: express-session changes the object it gets
+        (data) => callback(null, data ? (JSON.parse(data) as SessionData) : null),
+        (err: unknown) => callback(err),
+      );
   }
 
   // The package's typings declare touch as a property, so it is one here too.
@@ -130,8 +112,6 @@ export class LeanSessionStore extends SequelizeStore {
   }
 
   private forget(sid: string): void {
-    this.recent.delete(sid);
-    this.reading.delete(sid);
-    this.lastWrite.set(sid, ++this.seq);
+    this.recent.forget(sid);
   }
 }

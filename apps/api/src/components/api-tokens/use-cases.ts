@@ -1,9 +1,12 @@
 import { API_TOKEN_DEFAULT_DAYS, type ApiToken, type CreateApiTokenInput, type CreatedApiToken, type ListResponse } from '@polecourt/contracts';
 
 import { AppError } from '../../lib/app-error.js';
+import { KeptReads } from '../../lib/kept-reads.js';
 import type { SessionUser } from '../../lib/request-context.js';
 import { inTransaction } from '../../lib/transaction.js';
 import { recordAudit } from '../audit/record-audit.js';
+import { userRepository } from '../users/repository.js';
+import { sessionUser } from '../users/session-user-cache.js';
 import { apiTokenRepository, type ApiTokenRecord } from './repository.js';
 import { hashTokenSecret, looksLikeTokenSecret, newTokenSecret, shownPrefix } from './token-secret.js';
 
@@ -54,7 +57,7 @@ export async function listTokens(actor: SessionUser, everyone: boolean, limit: n
 
 /** Revokes a token of one's own; an administrator may revoke anyone's. */
 export async function revokeToken(actor: SessionUser, id: number): Promise<ApiToken> {
-  return inTransaction(async (t) => {
+  const revoked = await inTransaction(async (t) => {
     const before = await apiTokenRepository.findById(id, t);
     // Someone else's token is "not found" to a non-admin: its existence is not theirs to learn.
     if (!before || (before.userId !== actor.id && actor.role !== 'admin')) throw AppError.notFound('That token');
@@ -64,6 +67,9 @@ export async function revokeToken(actor: SessionUser, id: number): Promise<ApiTo
     await recordAudit(t, actor, { action: 'token.revoked', entityType: 'api_token', entityId: id, before: auditView(before), after: auditView(after) });
     return toView(after);
   });
+  // Once committed: the next call with this token reads it again and is refused.
+  tokens.forgetWhere((kept) => kept?.id === id);
+  return revoked;
 }
 
 const REFUSED = {
@@ -78,17 +84,25 @@ const REFUSED = {
  * Who a bearer token acts as: its owner, with the owner's current role.
  * Anything wrong is a 401 (the request is not authenticated at all).
  */
+// A pipeline's burst of calls looks its token up once a second (and its calls in
+// flight share that read); a revocation through this process drops it at once,
+// the other processes' copies run out within the second. The owner comes from
+// the signed-in-user cache, which an account change drops.
+const tokens = new KeptReads<string, ApiTokenRecord | null>({ max: 10_000, ttlMs: 1000 });
+
 export async function authenticateToken(secret: string, use: { method: string; path: string }): Promise<{ user: SessionUser; tokenId: number }> {
   if (!looksLikeTokenSecret(secret)) throw new AppError('token_invalid', REFUSED.malformed, 401);
-  const token = await apiTokenRepository.findByHash(hashTokenSecret(secret));
+  const token = await tokens.get(hashTokenSecret(secret), (hash) => apiTokenRepository.findByHash(hash));
   if (!token) throw new AppError('token_invalid', REFUSED.unknown, 401);
   const now = new Date();
   if (token.revokedAt) throw new AppError('token_revoked', REFUSED.revoked, 401);
   if (token.expiresAt.getTime() <= now.getTime()) throw new AppError('token_expired', REFUSED.expired, 401);
-  if (!token.owner.active) throw new AppError('account_inactive', REFUSED.inactive, 401);
-  const user: SessionUser = { id: token.owner.id, email: token.owner.email, name: token.owner.name, role: token.owner.role };
+  const user = await sessionUser(token.userId, (id) => userRepository.findById(id));
+  if (!user) throw new AppError('account_inactive', REFUSED.inactive, 401);
   // Read first so a busy pipeline does not issue an UPDATE per call; the UPDATE's own condition settles races.
   if (!token.lastUsedAt || now.getTime() - token.lastUsedAt.getTime() >= TOKEN_USE_AUDIT_GAP_MS) {
+    // Whoever records it, the use is recorded now: the kept copy need not try again this minute.
+    token.lastUsedAt = now;
     await inTransaction(async (t) => {
       if (!(await apiTokenRepository.touch(token.id, now, TOKEN_USE_AUDIT_GAP_MS, t))) return;
       await recordAudit(t, user, { action: 'token.used', entityType: 'api_token', entityId: token.id, after: { tokenId: token.id, prefix: token.prefix, method: use.method, path: use.path } });
