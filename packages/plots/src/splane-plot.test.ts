@@ -125,3 +125,21 @@ describe('splaneViewport', () => {
     expect(v.reMin).toBeGreaterThan(-500);
   });
 });
+
+describe('splanePlot dominance-threshold label', () => {
+  const base = { width: 400, height: 300, margin, poles: [{ re: -2, im: 3 }, { re: -2, im: -3 }], zeros: [], dominantPoles: [{ re: -2, im: 3 }, { re: -2, im: -3 }], dominanceRatio: 5 };
+
+  it('sits right of the threshold line when it fits there', () => {
+    const plot = splanePlot({ ...base, viewport: { reMin: -12, reMax: 30, imMin: -6, imMax: 6 } });
+    expect(plot.dominanceLine!.label.anchor).toBe('start');
+  });
+
+  it('goes to the left of the line when the right edge of the frame would cut it', () => {
+    // The threshold at -10 is 1 unit from the right edge of a -40 .. -9 window.
+    const plot = splanePlot({ ...base, viewport: { reMin: -40, reMax: -9, imMin: -6, imMax: 6 } });
+    const l = plot.dominanceLine!.label;
+    expect(l.anchor).toBe('end');
+    expect(l.x).toBeLessThan(plot.dominanceLine!.x);
+    expect(l.x - l.text.length * 11 * 0.55).toBeGreaterThanOrEqual(plot.frame.x);
+  });
+});

@@ -27,6 +27,8 @@ export interface SplanePlotInput {
   zeros?: readonly Complex[];
   dominantPoles?: readonly Complex[];
   dominanceRatio?: number | null;
+  /** Font size of the labels in the renderer (px or pt), for fitting them in the frame; 11 by default. */
+  fontSize?: number;
   /** Size of a pole or zero mark in pixels (half the x's width, the o's radius). */
   markSize?: number;
 }
@@ -130,6 +132,17 @@ function resample(points: Point[], spacing: number): Point[] {
  * (ratio times the dominant real part) as a vertical line, grid and ticks.
  * Real part to the right, imaginary part up; pixels grow right and down.
  */
+// To the right of the threshold line, or to its left when the frame's right
+// edge would cut it there (text width estimated at 0.55 em a character).
+function thresholdLabel(lx: number, frame: { x: number; y: number; width: number }, text: string, fontSize: number): Label {
+  const width = text.length * fontSize * 0.55;
+  const fitsRight = lx + 4 + width <= frame.x + frame.width;
+  const fitsLeft = lx - 4 - width >= frame.x;
+  return !fitsRight && fitsLeft
+    ? { x: lx - 4, y: frame.y + 4, text, anchor: 'end', baseline: 'top' }
+    : { x: lx + 4, y: frame.y + 4, text, anchor: 'start', baseline: 'top' };
+}
+
 export function splanePlot(input: SplanePlotInput): SplanePlot {
   const { width, height } = input;
   const frame = plotFrame(width, height, input.margin);
@@ -208,7 +221,7 @@ export function splanePlot(input: SplanePlotInput): SplanePlot {
         re,
         x: Math.round(lx * 100) / 100,
         d: `M${f(lx)},${f(frame.y)}L${f(lx)},${f(frame.y + frame.height)}`,
-        label: { x: lx + 4, y: frame.y + 4, text: `dominance threshold ${formatValue(ratio)} x ${formatValue(domRe)} = ${formatValue(re)} 1/s`, anchor: 'start', baseline: 'top' },
+        label: thresholdLabel(lx, frame, `dominance threshold ${formatValue(ratio)} x ${formatValue(domRe)} = ${formatValue(re)} 1/s`, input.fontSize ?? 11),
       };
     }
   }

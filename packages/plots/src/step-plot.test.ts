@@ -84,3 +84,29 @@ describe('stepPlot', () => {
     expect(p.yDomain[0]).toBeLessThan(-1.1);
   });
 });
+
+describe('stepPlot rise-time label', () => {
+  const labelSpan = (l: { x: number; text: string; anchor: string }, fontSize = 10) => {
+    const w = l.text.length * fontSize * 0.55;
+    return l.anchor === 'end' ? [l.x - w, l.x] : [l.x, l.x + w];
+  };
+  const input = { width: 700, height: 300, samples, finalValue: 1, settlingBandPct: 2, maxRiseTime: 0.5, maxSettlingTime: 5 };
+
+  it('stays right of the span when no time limit line stands there', () => {
+    const plot = stepPlot(input);
+    const rise = plot.guides.find((g) => g.kind === 'rise')!;
+    expect(rise.label.anchor).toBe('start');
+  });
+
+  it('moves past a peak-time line that would cross it, and no time limit line crosses it', () => {
+    // The span ends at t10 + 0.5 = 0.61 s; a peak-time limit at 1 s stands where the label would be.
+    const plot = stepPlot({ ...input, maxPeakTime: 1 });
+    const rise = plot.guides.find((g) => g.kind === 'rise')!;
+    const [from, to] = labelSpan(rise.label);
+    for (const g of plot.guides.filter((g) => g.kind === 'peak' || g.kind === 'settling')) {
+      const gx = firstPoint(g.d)[0];
+      expect(gx < from || gx > to).toBe(true);
+    }
+    expect(to).toBeLessThanOrEqual(plot.frame.x + plot.frame.width);
+  });
+});

@@ -166,12 +166,24 @@ export function stepPlot(input: StepPlotInput): StepPlot {
       const b = X(Math.min(t90, tMax));
       const d = `M${f(a)},${f(gy)}L${f(b)},${f(gy)}M${f(a)},${f(gy - 4)}L${f(a)},${f(gy + 4)}M${f(b)},${f(gy - 4)}L${f(b)},${f(gy + 4)}`;
       const text = `rise-time limit ${formatValue(input.maxRiseTime)} s (10-90 %)`;
-      const roomRight = right - b > text.length * fontSize * 0.55 + 8;
+      const width = text.length * fontSize * 0.55;
+      // Right of the span, left of it, or right of a vertical guide (peak or
+      // settling line) past the span: the first place with room that no
+      // vertical guide crosses, else the first place with room.
+      const lines = guides.filter((g) => g.kind === 'peak' || g.kind === 'settling').map((g) => X(g.value));
+      const startAt = (x0: number) => ({ label: { x: x0, y: gy, text, anchor: 'start', baseline: 'middle' } as Label, from: x0, to: x0 + width });
+      const sides = [
+        startAt(b + 5),
+        { label: { x: a - 5, y: gy, text, anchor: 'end', baseline: 'middle' } as Label, from: a - 5 - width, to: a - 5 },
+        ...lines.filter((gx) => gx > b).sort((p, q) => p - q).map((gx) => startAt(gx + 5)),
+      ].filter((c) => c.from >= left && c.to <= right);
+      const crossed = (c: { from: number; to: number }) => lines.some((gx) => gx >= c.from - 3 && gx <= c.to + 3);
+      const side = sides.find((c) => !crossed(c)) ?? sides[0];
       guides.push({
         kind: 'rise',
         value: input.maxRiseTime,
         d,
-        label: roomRight ? { x: b + 5, y: gy, text, anchor: 'start', baseline: 'middle' } : { x: a - 5, y: gy, text, anchor: 'end', baseline: 'middle' },
+        label: side?.label ?? { x: a - 5, y: gy, text, anchor: 'end', baseline: 'middle' },
       });
     }
   }

@@ -200,6 +200,7 @@ export async function renderReport(c: ReportContent): Promise<RenderedReport> {
     zeros: result.zeros,
     dominantPoles: dom?.poles ?? [],
     dominanceRatio: c.bounds.dominanceRatio,
+    fontSize: 7,
   });
   layout.ensure(S_PLANE_BOX.height + 20);
   drawSplane(layout, splane, PAGE.left, layout.y);

@@ -446,7 +446,7 @@ const UpperLayer = memo(function UpperLayer({ geometry }: { geometry: SplaneGeom
         </g>
       ))}
       {plot.dominanceLine && (
-        <text x={plot.dominanceLine.label.x} y={plot.dominanceLine.label.y} dominantBaseline="hanging" fontSize={11} fill="var(--color-ink-muted)" paintOrder="stroke" stroke="var(--color-paper-raised)" strokeWidth={3}>
+        <text x={plot.dominanceLine.label.x} y={plot.dominanceLine.label.y} textAnchor={plot.dominanceLine.label.anchor} dominantBaseline="hanging" fontSize={11} fill="var(--color-ink-muted)" paintOrder="stroke" stroke="var(--color-paper-raised)" strokeWidth={3}>
           {plot.dominanceLine.label.text}
         </text>
       )}
