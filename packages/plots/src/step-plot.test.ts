@@ -86,7 +86,7 @@ describe('stepPlot', () => {
 });
 
 describe('stepPlot rise-time label', () => {
-  const labelSpan = (l: { x: number; text: string; anchor: string }, fontSize = 10) => {
+  const labelSpan = (l: { x: number; text: string; anchor: string }, fontSize = 10): [number, number] => {
     const w = l.text.length * fontSize * 0.55;
     return l.anchor === 'end' ? [l.x - w, l.x] : [l.x, l.x + w];
   };
