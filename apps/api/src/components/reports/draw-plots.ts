@@ -58,7 +58,7 @@ export function drawSplane(layout: Layout, plot: SplanePlot, x: number, y: numbe
   for (const b of plot.boundaryPaths) {
     layout.label({ x: b.anchor.x, y: b.anchor.y + 0.3, text: String(b.key), anchor: 'middle', baseline: 'middle' }, x, y, { size: 6.5, weight: 'semibold', color: '#ffffff' });
   }
-  if (plot.dominanceLine) layout.label(plot.dominanceLine.label, x, y, { size: 7, color: INK.caution });
+  if (plot.dominanceLine) layout.label(plot.dominanceLine.label, x, y, { size: 7, color: INK.caution }, INK.paper);
   for (const o of plot.offPlot) layout.label(o.label, x, y, { size: 7, color: INK.muted });
 }
 

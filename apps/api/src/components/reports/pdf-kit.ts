@@ -137,12 +137,17 @@ export class Layout {
   }
 
   /** A plot label placed by its anchor and baseline (the plots package's convention). */
-  label(l: Label, ox: number, oy: number, s: TextStyle = {}): void {
+  /** A plot label at (ox + l.x, oy + l.y); `backdrop` fills a box of that colour under it, so lines it crosses do not run through the text. */
+  label(l: Label, ox: number, oy: number, s: TextStyle = {}, backdrop?: string): void {
     this.style(s);
     const w = this.doc.widthOfString(l.text, { features: FEATURES });
     const h = this.doc.currentLineHeight();
     const dx = l.anchor === 'middle' ? -w / 2 : l.anchor === 'end' ? -w : 0;
     const dy = l.baseline === 'middle' ? -h / 2 : l.baseline === 'bottom' ? -h : 0;
+    if (backdrop && !l.rotate) {
+      this.doc.rect(ox + l.x + dx - 1.5, oy + l.y + dy - 0.5, w + 3, h + 1).fill(backdrop);
+      this.style(s); // fill() changed the fill colour the text is drawn in
+    }
     if (l.rotate) {
       this.doc.save();
       this.doc.rotate(l.rotate, { origin: [ox + l.x, oy + l.y] });
