@@ -120,6 +120,16 @@ describe('POST /api/candidates/:id/assessments', () => {
     expect((await new TestClient(url).post('/api/candidates/1/assessments', {})).status).toBe(401);
   });
 
+  it('When a revision this process still knows as approved has been retired since, then storing refuses with 409 revision_retired and keeps nothing', async () => {
+    const { set, revision, candidate } = await lineWithApproved();
+    expect((await team.controls.post(`/api/candidates/${candidate.id}/assessments`, { revisionId: revision.id })).status).toBe(201);
+    await approved(team, set.id, { maxOvershootPct: 5 }); // retires the first revision
+    const r = await team.controls.post(`/api/candidates/${candidate.id}/assessments`, { revisionId: revision.id });
+    expect(r.status).toBe(409);
+    expect(r.body.error.code).toBe('revision_retired');
+    expect((await team.auditor.get(`/api/candidates/${candidate.id}/assessments`)).body.total).toBe(1);
+  });
+
   it('When 40 assessments arrive at once (stored together in one commit), then each answer names its own row and its own audit event, and the chain stays intact', async () => {
     const { revision, candidate } = await lineWithApproved();
     const answers = await Promise.all(Array.from({ length: 40 }, () => team.controls.post(`/api/candidates/${candidate.id}/assessments`, { revisionId: revision.id })));
