@@ -32,16 +32,26 @@ export interface Running {
 let running: Running | null = null;
 let closeApp: (() => void) | null = null;
 let reports: RunningReportServices | null = null;
-let mail: { fake: MailFake | null; worker: MailWorker | null; closeTransport: () => void } | null = null;
+interface MailPieces {
+  fake: MailFake | null;
+  worker: MailWorker | null;
+  closeTransport: () => void;
+}
+let mail: MailPieces | null = null;
 
-async function stopMail(): Promise<void> {
-  if (!mail) return;
-  const { fake, worker, closeTransport } = mail;
-  mail = null;
+/** The sender finishes the send in hand; the fake stores what it received. */
+async function closeMail({ fake, worker, closeTransport }: MailPieces): Promise<void> {
   registerMailWorker(null);
   await worker?.stop();
   closeTransport();
   await fake?.close();
+}
+
+async function stopMail(): Promise<void> {
+  if (!mail) return;
+  const pieces = mail;
+  mail = null;
+  await closeMail(pieces);
 }
 
 /** The message a cluster's HTTP process sends its parent when it has queued mail. */
@@ -172,10 +182,7 @@ export async function startServices(overrides: Partial<Record<string, string>> =
     childEnv,
     kickMail: sender.kick,
     async stop() {
-      registerMailWorker(null);
-      await sender.stop();
-      transport.close();
-      await fake?.close();
+      await closeMail({ fake, worker: sender, closeTransport: () => transport.close() });
       await services.stop();
       await sequelize.close();
     },
@@ -190,7 +197,6 @@ export async function stop(): Promise<void> {
   closeApp = null;
   server.closeAllConnections();
   await new Promise<void>((resolve) => server.close(() => resolve()));
-  // The worker finishes the send in hand; the fake stores what it received.
   await stopMail();
   await reports?.stop();
   reports = null;

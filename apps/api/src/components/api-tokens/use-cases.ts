@@ -80,16 +80,16 @@ const REFUSED = {
   inactive: 'The account that owns this API token is deactivated.',
 } as const;
 
-/**
- * Who a bearer token acts as: its owner, with the owner's current role.
- * Anything wrong is a 401 (the request is not authenticated at all).
- */
 // A pipeline's burst of calls looks its token up once a second (and its calls in
 // flight share that read); a revocation through this process drops it at once,
 // the other processes' copies run out within the second. The owner comes from
 // the signed-in-user cache, which an account change drops.
 const tokens = new KeptReads<string, ApiTokenRecord | null>({ max: 10_000, ttlMs: 1000 });
 
+/**
+ * Who a bearer token acts as: its owner, with the owner's current role.
+ * Anything wrong is a 401 (the request is not authenticated at all).
+ */
 export async function authenticateToken(secret: string, use: { method: string; path: string }): Promise<{ user: SessionUser; tokenId: number }> {
   if (!looksLikeTokenSecret(secret)) throw new AppError('token_invalid', REFUSED.malformed, 401);
   const token = await tokens.get(hashTokenSecret(secret), (hash) => apiTokenRepository.findByHash(hash));

@@ -20,9 +20,11 @@ export interface CandidateDesign {
   design: Record<string, unknown>;
 }
 
-function toRecord(row: CandidateModel | null): CandidateRecord | null {
+type CandidateRow = Pick<CandidateModel, 'id' | 'productLineId' | 'name' | 'notes' | 'designJson' | 'createdBy' | 'createdAt'>;
+
+function toRecord(row: CandidateModel | CandidateRow | null | undefined): CandidateRecord | null {
   if (!row) return null;
-  const c = row.get({ plain: true });
+  const c: CandidateRow = row instanceof CandidateModel ? row.get({ plain: true }) : row;
   return {
     id: c.id,
     productLineId: c.productLineId,
@@ -45,21 +47,11 @@ export interface NewCandidate {
 export const candidateRepository = {
   // A plain query: every assessment request reads its candidate.
   async findById(id: number, transaction?: Transaction): Promise<CandidateRecord | null> {
-    const rows = await getSequelize().query<{ id: number; product_line_id: number; name: string; notes: string; design_json: string; created_by: number | null; created_at: Date }>(
-      'SELECT id, product_line_id, name, notes, design_json, created_by, created_at FROM candidates WHERE id = ?',
+    const rows = await getSequelize().query<CandidateRow>(
+      'SELECT id, product_line_id AS productLineId, name, notes, design_json AS designJson, created_by AS createdBy, created_at AS createdAt FROM candidates WHERE id = ?',
       { replacements: [id], type: QueryTypes.SELECT, transaction },
     );
-    const c = rows[0];
-    if (!c) return null;
-    return {
-      id: Number(c.id),
-      productLineId: Number(c.product_line_id),
-      name: c.name,
-      notes: c.notes,
-      design: JSON.parse(c.design_json) as Record<string, unknown>,
-      createdBy: c.created_by === null ? null : Number(c.created_by),
-      createdAt: new Date(c.created_at).toISOString(),
-    };
+    return toRecord(rows[0]);
   },
   async listByLine(productLineId: number, limit: number, offset: number): Promise<{ items: CandidateRecord[]; total: number }> {
     const { rows, count } = await CandidateModel.findAndCountAll({ where: { productLineId }, order: [['id', 'DESC']], limit, offset });

@@ -18,9 +18,11 @@ export interface RequirementSetStats {
   revisionCount: number;
 }
 
-function toRecord(row: RequirementSetModel | null): RequirementSetRecord | null {
+type RequirementSetRow = Pick<RequirementSetModel, 'id' | 'productLineId' | 'name' | 'purpose' | 'createdBy' | 'createdAt'>;
+
+function toRecord(row: RequirementSetModel | RequirementSetRow | null | undefined): RequirementSetRecord | null {
   if (!row) return null;
-  const s = row.get({ plain: true });
+  const s: RequirementSetRow = row instanceof RequirementSetModel ? row.get({ plain: true }) : row;
   return {
     id: s.id,
     productLineId: s.productLineId,
@@ -33,20 +35,11 @@ function toRecord(row: RequirementSetModel | null): RequirementSetRecord | null 
 
 // A plain query for reads by id (every assessment checks its revision's set).
 async function selectById(id: number, transaction: Transaction | undefined, lock: '' | 'FOR UPDATE'): Promise<RequirementSetRecord | null> {
-  const rows = await getSequelize().query<{ id: number; product_line_id: number; name: string; purpose: string; created_by: number | null; created_at: Date }>(
-    `SELECT id, product_line_id, name, purpose, created_by, created_at FROM requirement_sets WHERE id = ? ${lock}`,
+  const rows = await getSequelize().query<RequirementSetRow>(
+    `SELECT id, product_line_id AS productLineId, name, purpose, created_by AS createdBy, created_at AS createdAt FROM requirement_sets WHERE id = ? ${lock}`,
     { replacements: [id], type: QueryTypes.SELECT, transaction },
   );
-  const s = rows[0];
-  if (!s) return null;
-  return {
-    id: Number(s.id),
-    productLineId: Number(s.product_line_id),
-    name: s.name,
-    purpose: s.purpose,
-    createdBy: s.created_by === null ? null : Number(s.created_by),
-    createdAt: new Date(s.created_at).toISOString(),
-  };
+  return toRecord(rows[0]);
 }
 
 export const requirementSetRepository = {
