@@ -1,4 +1,4 @@
-// Builds only what changed: the engine (tsc, for the CLI) and the web client (vite).
+// Builds only what changed: the engine (tsc, and one bundled file for the CLI) and the web client (vite).
 import { existsSync, readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
 
@@ -27,7 +27,7 @@ export function buildAll(root, { force = false } = {}) {
   const contracts = path.join(root, 'packages/contracts');
   const web = path.join(root, 'apps/web');
   const lock = path.join(root, 'pnpm-lock.yaml');
-  if (force || stale(path.join(spec, 'dist/cli.js'), [path.join(spec, 'src'), path.join(spec, 'package.json'), lock])) {
+  if (force || stale(path.join(spec, 'dist/cli.js'), [path.join(spec, 'src'), path.join(spec, 'scripts'), path.join(spec, 'package.json'), lock])) {
     step('building the engine and its CLI (packages/spec)');
     run('pnpm', ['--filter', '@polecourt/spec', 'run', 'build'], { cwd: root });
   }

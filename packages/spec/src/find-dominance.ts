@@ -11,6 +11,7 @@
 import type { Complex, Dominance, Model } from './types.js';
 import { axisTolerance } from './axis-tolerance.js';
 import { formatNumber, formatRoot } from './format-complex.js';
+import { newRootList } from './root-list.js';
 
 export const CANCELLATION_TOLERANCE = 1e-2;
 
@@ -19,7 +20,7 @@ export function findDominance(model: Model, dominanceRatio: number): Dominance {
   const poles = model.poles;
   if (poles.length === 0) {
     return {
-      poles: [],
+      poles: newRootList(),
       dampingRatio: null,
       naturalFrequency: null,
       ratio: null,
@@ -37,7 +38,8 @@ export function findDominance(model: Model, dominanceRatio: number): Dominance {
       `the zero at ${formatRoot(z)} nearly cancels the ${z.im === 0 ? 'pole' : 'poles'} at ${formatRoot(poles[i] as Complex)} (within 1 %): the pair is left out of the dominance ratios`,
     );
   }
-  let candidates = poles.map((_, i) => i).filter((i) => poleCancelled[i] === false);
+  let candidates: number[] = [];
+  for (let i = 0; i < poles.length; i++) if (poleCancelled[i] === 0) candidates.push(i);
   if (candidates.length === 0) candidates = poles.map((_, i) => i);
   // poles are sorted slowest first, so the first candidate is the dominant one
   const d0 = candidates[0] as number;
@@ -107,8 +109,13 @@ export function findDominance(model: Model, dominanceRatio: number): Dominance {
       );
     }
   }
+  const dominant = newRootList();
+  for (const i of members) {
+    const p = poles[i] as Complex;
+    dominant.push({ re: p.re, im: p.im });
+  }
   return {
-    poles: members.map((i) => ({ ...(poles[i] as Complex) })),
+    poles: dominant,
     dampingRatio: isPair ? -dom.re / mod : null,
     naturalFrequency: mod,
     ratio,
@@ -123,7 +130,9 @@ function formatRatio(r: number): string {
 }
 
 // Closest (relative) pole-zero pairs first, each pole and zero used once.
-function matchCancellations(model: Model): { poleCancelled: boolean[]; zeroCancelled: number[] } {
+// Typed arrays, whose shape does not depend on how V8 built them (an array
+// from Array.prototype.map differs between the interpreter and optimised code).
+function matchCancellations(model: Model): { poleCancelled: Uint8Array; zeroCancelled: Int32Array } {
   const candidates: { i: number; j: number; d: number }[] = [];
   model.zeros.forEach((z, j) => {
     model.poles.forEach((p, i) => {
@@ -133,11 +142,11 @@ function matchCancellations(model: Model): { poleCancelled: boolean[]; zeroCance
     });
   });
   candidates.sort((a, b) => a.d - b.d);
-  const poleCancelled = model.poles.map(() => false);
-  const zeroCancelled = model.zeros.map(() => -1);
+  const poleCancelled = new Uint8Array(model.poles.length);
+  const zeroCancelled = new Int32Array(model.zeros.length).fill(-1);
   for (const c of candidates) {
     if (poleCancelled[c.i] || (zeroCancelled[c.j] as number) >= 0) continue;
-    poleCancelled[c.i] = true;
+    poleCancelled[c.i] = 1;
     zeroCancelled[c.j] = c.i;
   }
   return { poleCancelled, zeroCancelled };

@@ -15,6 +15,7 @@ import { SpecInputError } from './spec-input-error.js';
 import { MAX_MODEL_ORDER } from './max-model-order.js';
 import { polyFromRoots } from './poly-from-roots.js';
 import { polyRoots } from './poly-roots.js';
+import { newRootList } from './root-list.js';
 import { sortRoots } from './sort-roots.js';
 
 const CONJUGATE_TOLERANCE = 1e-9;
@@ -143,14 +144,17 @@ function parseRootList(value: unknown, path: string): Complex[] {
       path,
     );
   }
-  return value.map((item, i) => {
+  const out = newRootList();
+  for (let i = 0; i < value.length; i++) {
+    const item: unknown = value[i];
     const at = `${path}[${i}]`;
     if (!isPlainObject(item)) throw new SpecInputError('invalid_type', `${at} must be an object {re, im}.`, at);
     for (const key of Object.keys(item)) {
       if (key !== 're' && key !== 'im') throw new SpecInputError('unknown_field', `"${key}" is not a field of ${at}; use re and im.`, `${at}.${key}`);
     }
-    return { re: parseFiniteNumber(item['re'], `${at}.re`), im: parseFiniteNumber(item['im'], `${at}.im`) };
-  });
+    out.push({ re: parseFiniteNumber(item['re'], `${at}.re`), im: parseFiniteNumber(item['im'], `${at}.im`) });
+  }
+  return out;
 }
 
 function parseCoefficientList(value: unknown, path: string): number[] {
@@ -177,8 +181,9 @@ function parseFiniteNumber(value: unknown, path: string): number {
 // Pairs every non-real entry with its conjugate (relative tolerance 1e-9) and
 // replaces both by exact conjugates; an entry left without a partner is an error.
 function enforceConjugates(list: Complex[], path: string): Complex[] {
-  const out = list.map((z) => ({ re: z.re, im: z.im }));
-  const matched = new Array<boolean>(out.length).fill(false);
+  const out = newRootList();
+  for (const z of list) out.push({ re: z.re, im: z.im });
+  const matched = new Uint8Array(out.length);
   for (let i = 0; i < out.length; i++) {
     const a = out[i] as Complex;
     if (a.im === 0 || matched[i]) continue;
@@ -202,7 +207,7 @@ function enforceConjugates(list: Complex[], path: string): Complex[] {
         `${path}[${i}]`,
       );
     }
-    matched[i] = matched[best] = true;
+    matched[i] = matched[best] = 1;
     const re = (a.re + b.re) / 2;
     const im = (Math.abs(a.im) + Math.abs(b.im)) / 2;
     a.re = b.re = re;
