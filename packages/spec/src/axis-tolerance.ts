@@ -5,11 +5,12 @@
 // the honest reading; it also absorbs the round-off of root finding
 // (about 1e-16 of the largest root).
 import type { Complex } from './types.js';
+import { magnitude } from './magnitude.js';
 
 export const AXIS_RELATIVE_TOLERANCE = 1e-9;
 
 export function axisTolerance(poles: readonly Complex[]): number {
   let s = 0;
-  for (const p of poles) s = Math.max(s, Math.hypot(p.re, p.im));
+  for (const p of poles) s = Math.max(s, magnitude(p.re, p.im));
   return AXIS_RELATIVE_TOLERANCE * s;
 }

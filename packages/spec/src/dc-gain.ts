@@ -3,10 +3,11 @@
 // the origin (within the axis tolerance, see axis-tolerance.ts).
 import type { Model } from './types.js';
 import { axisTolerance } from './axis-tolerance.js';
+import { magnitude } from './magnitude.js';
 
 export function dcGain(model: Model): number | null {
   const tol = axisTolerance(model.poles);
-  if (model.poles.some((p) => Math.hypot(p.re, p.im) <= tol)) return null;
+  if (model.poles.some((p) => magnitude(p.re, p.im) <= tol)) return null;
   let re = model.gain;
   let im = 0;
   const n = Math.max(model.poles.length, model.zeros.length);

@@ -2,24 +2,34 @@
 // allocating: out[level] for level < levels. Returns the largest |p| among the
 // transient terms still bigger than `significant` at t (their value bound),
 // which sets the bracketing step of the metrics scan; 0 when none is.
+// evalPhases sums the terms from their phases at t (term-phases.ts);
+// evalResponse computes those phases directly first.
 import { PACKED_LEVELS, type PackedResponse } from './pack-response.js';
+import { newTermPhases, phasesAt, type TermPhases } from './term-phases.js';
+
+const scratch = newTermPhases();
 
 export function evalResponse(p: PackedResponse, t: number, levels: number, out: Float64Array, significant = 0): number {
+  phasesAt(p, t, scratch);
+  return evalPhases(p, scratch, levels, out, significant);
+}
+
+export function evalPhases(p: PackedResponse, ph: TermPhases, levels: number, out: Float64Array, significant = 0): number {
   for (let l = 0; l < levels; l++) out[l] = 0;
   let fastest = 0;
+  const t = ph.t;
+  const v = ph.v;
   const flat = p.flat;
   const count = p.count;
   for (let k = 0; k < count; k++) {
-    const sigma = p.sigma[k] as number;
-    const e = sigma === 0 ? 1 : Math.exp(sigma * t);
+    const e = v[3 * k] as number;
     if (e === 0) continue;
-    const omega = p.omega[k] as number;
     const m = p.degree[k] as number;
     const off = p.offset[k] as number;
     const base = 2 * PACKED_LEVELS * off;
-    if (omega !== 0) {
-      const c = e * Math.cos(omega * t);
-      const s = e * Math.sin(omega * t);
+    if ((p.omega[k] as number) !== 0) {
+      const c = v[3 * k + 1] as number;
+      const s = v[3 * k + 2] as number;
       if (m === 1) {
         for (let l = 0; l < levels; l++) {
           const i = base + 2 * l;
@@ -52,9 +62,9 @@ export function evalResponse(p: PackedResponse, t: number, levels: number, out: 
       }
     }
     if (significant > 0 && p.transient[k] && (p.speed[k] as number) > fastest) {
-      let v = p.bound[off + m - 1] as number;
-      for (let n = m - 2; n >= 0; n--) v = v * t + (p.bound[off + n] as number);
-      if (e * v > significant) fastest = p.speed[k] as number;
+      let b = p.bound[off + m - 1] as number;
+      for (let n = m - 2; n >= 0; n--) b = b * t + (p.bound[off + n] as number);
+      if (e * b > significant) fastest = p.speed[k] as number;
     }
   }
   return fastest;

@@ -12,6 +12,7 @@ import type { Complex, Dominance, Model } from './types.js';
 import { axisTolerance } from './axis-tolerance.js';
 import { formatNumber, formatRoot } from './format-complex.js';
 import { newRootList } from './root-list.js';
+import { magnitude } from './magnitude.js';
 
 export const CANCELLATION_TOLERANCE = 1e-2;
 
@@ -51,7 +52,7 @@ export function findDominance(model: Model, dominanceRatio: number): Dominance {
   }
   const isPair = dom.im !== 0;
   const what = isPair ? 'the dominant pair' : 'the dominant pole';
-  const mod = Math.hypot(dom.re, dom.im);
+  const mod = magnitude(dom.re, dom.im);
   const tol = axisTolerance(poles);
   const stable = dom.re < -tol;
   if (!stable) {
@@ -136,8 +137,8 @@ function matchCancellations(model: Model): { poleCancelled: Uint8Array; zeroCanc
   const candidates: { i: number; j: number; d: number }[] = [];
   model.zeros.forEach((z, j) => {
     model.poles.forEach((p, i) => {
-      const size = Math.hypot(p.re, p.im);
-      const d = Math.hypot(z.re - p.re, z.im - p.im);
+      const size = magnitude(p.re, p.im);
+      const d = magnitude(z.re - p.re, z.im - p.im);
       if (d <= CANCELLATION_TOLERANCE * size || d === 0) candidates.push({ i, j, d: size === 0 ? 0 : d / size });
     });
   });

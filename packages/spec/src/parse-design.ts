@@ -17,6 +17,7 @@ import { polyFromRoots } from './poly-from-roots.js';
 import { polyRoots } from './poly-roots.js';
 import { newRootList } from './root-list.js';
 import { sortRoots } from './sort-roots.js';
+import { magnitude } from './magnitude.js';
 
 const CONJUGATE_TOLERANCE = 1e-9;
 const ZPK_FIELDS = new Set(['id', 'poles', 'zeros', 'gain']);
@@ -192,14 +193,14 @@ function enforceConjugates(list: Complex[], path: string): Complex[] {
     for (let j = i + 1; j < out.length; j++) {
       const b = out[j] as Complex;
       if (matched[j] || b.im === 0) continue;
-      const d = Math.hypot(a.re - b.re, a.im + b.im);
+      const d = magnitude(a.re - b.re, a.im + b.im);
       if (d < bestD) {
         bestD = d;
         best = j;
       }
     }
     const b = best >= 0 ? (out[best] as Complex) : undefined;
-    if (!b || bestD > CONJUGATE_TOLERANCE * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im))) {
+    if (!b || bestD > CONJUGATE_TOLERANCE * Math.max(magnitude(a.re, a.im), magnitude(b.re, b.im))) {
       const sign = a.im > 0 ? '-' : '+';
       throw new SpecInputError(
         'unmatched_conjugate',

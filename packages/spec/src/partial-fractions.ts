@@ -18,6 +18,7 @@
 // Y is strictly proper, so there is no impulse at t = 0; the feedthrough
 // D = G(inf) is reported because y(0+) = D.
 import type { Complex, Model } from './types.js';
+import { magnitude } from './magnitude.js';
 
 export const POLE_CLUSTER_TOLERANCE = 1e-5;
 
@@ -93,7 +94,13 @@ export function partialFractions(model: Model): ModalForm {
 
 function clusterPoles(poles: Complex[]): Group[] {
   const n = poles.length;
-  const parent = Array.from({ length: n }, (_, i) => i);
+  const parent = new Int32Array(n);
+  const size = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const a = poles[i] as Complex;
+    parent[i] = i;
+    size[i] = magnitude(a.re, a.im);
+  }
   const find = (i: number): number => {
     while (parent[i] !== i) i = parent[i] as number;
     return i;
@@ -102,29 +109,33 @@ function clusterPoles(poles: Complex[]): Group[] {
     const a = poles[i] as Complex;
     for (let j = i + 1; j < n; j++) {
       const b = poles[j] as Complex;
-      const d = Math.hypot(a.re - b.re, a.im - b.im);
-      if (d <= POLE_CLUSTER_TOLERANCE * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im))) {
+      const d = magnitude(a.re - b.re, a.im - b.im);
+      if (d <= POLE_CLUSTER_TOLERANCE * Math.max(size[i] as number, size[j] as number)) {
         parent[find(i)] = find(j);
       }
     }
   }
-  const sums = new Map<number, Group>();
+  // groups in the order their first pole appears
+  const out: Group[] = [];
+  const slot = new Int32Array(n).fill(-1);
   for (let i = 0; i < n; i++) {
     const a = poles[i] as Complex;
     const root = find(i);
-    const g = sums.get(root) ?? { re: 0, im: 0, m: 0 };
-    g.re += a.re;
-    g.im += a.im;
-    g.m++;
-    sums.set(root, g);
+    let g = slot[root] as number;
+    if (g < 0) {
+      g = slot[root] = out.length;
+      out.push({ re: 0, im: 0, m: 0 });
+    }
+    const group = out[g] as Group;
+    group.re += a.re;
+    group.im += a.im;
+    group.m++;
   }
-  const out: Group[] = [];
-  for (const g of sums.values()) {
-    const re = g.re / g.m;
-    let im = g.im / g.m;
+  for (const g of out) {
+    g.re /= g.m;
+    g.im /= g.m;
     // a cluster that swallowed a conjugate pair sits on the real axis
-    if (Math.abs(im) <= POLE_CLUSTER_TOLERANCE * Math.hypot(re, im)) im = 0;
-    out.push({ re, im, m: g.m });
+    if (Math.abs(g.im) <= POLE_CLUSTER_TOLERANCE * magnitude(g.re, g.im)) g.im = 0;
   }
   return out;
 }

@@ -3,6 +3,7 @@ import { riseTimeNormalizedFast } from './rise-time-normalized-fast.js';
 import { settlingConstant } from './settling-constant.js';
 import { tightenLimits, type Limits } from './tighten-limits.js';
 import type { Complex, Requirements } from './types.js';
+import { magnitude } from './magnitude.js';
 
 export interface RegionSlack {
   /** Per limit present: limit minus the second-order value (or value minus floor), in the limit's units; >= 0 inside. */
@@ -22,7 +23,7 @@ export interface RegionSlack {
 export function regionSlack(pole: Complex, req: Requirements): RegionSlack {
   const sigma = -pole.re;
   const wd = Math.abs(pole.im);
-  const wn = Math.hypot(sigma, wd);
+  const wn = magnitude(sigma, wd);
   const zeta = wn > 0 ? sigma / wn : 0;
   const limits = tightenLimits(req);
   const slack: RegionSlack['slack'] = {};

@@ -2,6 +2,7 @@ import { overshootFromDamping } from './overshoot-from-damping.js';
 import { riseTimeNormalizedFast } from './rise-time-normalized-fast.js';
 import { settlingConstant } from './settling-constant.js';
 import type { Dominance, Estimate } from './types.js';
+import { magnitude } from './magnitude.js';
 
 // The textbook view of a response from its dominant pole(s) alone.
 // A complex pair -sigma +/- j omega_d (omega_n, zeta): overshoot
@@ -25,7 +26,7 @@ export function secondOrderEstimate(dominance: Dominance, settlingBandPct: numbe
       riseTime: Math.log(9) / sigma,
     };
   }
-  const wn = Math.hypot(sigma, wd);
+  const wn = magnitude(sigma, wd);
   const zeta = sigma / wn;
   return {
     overshootPct: overshootFromDamping(zeta),

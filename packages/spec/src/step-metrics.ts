@@ -28,7 +28,8 @@ import { stability } from './is-stable.js';
 import { dcGain } from './dc-gain.js';
 import { partialFractions } from './partial-fractions.js';
 import { packResponse, type PackedResponse } from './pack-response.js';
-import { evalResponse } from './eval-response.js';
+import { evalPhases } from './eval-response.js';
+import { advancePhases, multiplyPhases, newTermPhases, phasesAt, type TermPhases } from './term-phases.js';
 import { transientBound, transientHorizon } from './transient-horizon.js';
 import { formatNumber } from './format-complex.js';
 
@@ -43,6 +44,12 @@ const MAX_ROUNDING = 1e-8;
 const MAX_STEPS = 2_000_000;
 
 const buf = new Float64Array(4);
+// Phases of the scan (now, next step, one step) and of the refinements: one
+// set per module, since a scan runs to its end before the next one starts.
+const scanNow = newTermPhases();
+const scanNext = newTermPhases();
+const scanStep = newTermPhases();
+const probe = newTermPhases();
 
 export function computeStepMetrics(model: Model, settlingBandPct: number): { metrics: StepMetrics | null; notes: string[] } {
   const st = stability(model);
@@ -152,10 +159,16 @@ class Scan {
   entryRB = 0;
   entryLevel = 0;
 
+  /** The phases at t, and those of the current step length. */
+  now: TermPhases = scanNow;
+  next: TermPhases = scanNext;
+  stepLength = Number.NaN;
+
   constructor(p: PackedResponse, band: number) {
     this.p = p;
     this.band = band;
-    this.fastest = evalResponse(p, 0, 4, buf, SIGNIFICANT);
+    phasesAt(p, 0, this.now);
+    this.fastest = evalPhases(p, this.now, 4, buf, SIGNIFICANT);
     this.r = buf[0] as number;
     this.d = buf[1] as number;
     this.dd = buf[2] as number;
@@ -182,7 +195,14 @@ class Scan {
       const b = Math.min(a + h, tEnd);
       const ra = this.r;
       const dda = this.dd;
-      const fastest = evalResponse(p, b, 3, buf, SIGNIFICANT);
+      // steps mostly repeat one length: the next phases are the current ones
+      // times the phases of that length (term-phases.ts)
+      if (b - a !== this.stepLength) {
+        this.stepLength = b - a;
+        phasesAt(p, this.stepLength, scanStep);
+      }
+      multiplyPhases(p, this.now, scanStep, this.next, b);
+      const fastest = evalPhases(p, this.next, 3, buf, SIGNIFICANT);
       const rb = buf[0] as number;
       const db = buf[1] as number;
       const ddb = buf[2] as number;
@@ -196,7 +216,8 @@ class Scan {
       } else if (Math.sign(dda) * Math.sign(ddb) < 0 && mayDip(this.d, db, dda, ddb, b - a)) {
         // r' may dip across zero and back inside this step
         const m = refine(p, 2, 0, a, b, dda, ddb);
-        evalResponse(p, m, 2, buf);
+        advancePhases(p, probe, m, probe);
+        evalPhases(p, probe, 2, buf);
         const dm = buf[1] as number;
         if (Math.sign(dm) === -this.dir && dm !== 0) {
           const c1 = refine(p, 1, 0, a, m, this.d, dm);
@@ -210,6 +231,9 @@ class Scan {
           this.piece(c2, r2, b, rb);
         } else this.piece(a, ra, b, rb);
       } else this.piece(a, ra, b, rb);
+      const now = this.now;
+      this.now = this.next;
+      this.next = now;
       this.t = b;
       this.r = rb;
       this.d = db;
@@ -254,8 +278,10 @@ function levelScale(p: PackedResponse): number {
   return s;
 }
 
+// r at a point just refined: the probe's phases sit next to it.
 function valueAt(p: PackedResponse, t: number): number {
-  evalResponse(p, t, 1, buf);
+  advancePhases(p, probe, t, probe);
+  evalPhases(p, probe, 1, buf);
   return buf[0] as number;
 }
 
@@ -274,7 +300,9 @@ export function refine(p: PackedResponse, level: number, target: number, a: numb
   if (!(x > Math.min(a, b) && x < Math.max(a, b))) x = 0.5 * (a + b);
   let dxOld = Math.abs(b - a);
   let dx = dxOld;
-  evalResponse(p, x, level + 2, buf);
+  // the first point directly; later ones from the last (term-phases.ts)
+  phasesAt(p, x, probe);
+  evalPhases(p, probe, level + 2, buf);
   let f = (buf[level] as number) - target;
   let df = buf[level + 1] as number;
   if (f === 0) return x;
@@ -292,7 +320,8 @@ export function refine(p: PackedResponse, level: number, target: number, a: numb
       x -= dx;
       if (Math.abs(dx) <= 1e-12 * Math.abs(x)) return x;
     }
-    evalResponse(p, x, level + 2, buf);
+    advancePhases(p, probe, x, probe);
+    evalPhases(p, probe, level + 2, buf);
     f = (buf[level] as number) - target;
     df = buf[level + 1] as number;
     if (f === 0) return x;
