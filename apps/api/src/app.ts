@@ -96,6 +96,11 @@ export function buildApp(config: Config, sequelize: Sequelize): BuiltApp {
     csrfGuard,
   );
 
+  // The core workflow: each router names its full paths under /api. It comes
+  // first, the most used routers first, since Express tries every layer in
+  // order and each miss costs a path match and its garbage on every request.
+  app.use('/api', revisionRoutes(), assessmentRoutes(), candidateRoutes(), productLineRoutes(), requirementSetRoutes(), coverageRoutes());
+  app.use('/api', reportRoutes());
   app.use(
     '/api/auth',
     authRoutes(SESSION_COOKIE, {
@@ -110,9 +115,6 @@ export function buildApp(config: Config, sequelize: Sequelize): BuiltApp {
   app.use('/api/users', userRoutes());
   app.use('/api/outbox', outboxRoutes());
   app.use('/api/audit-events', auditRoutes());
-  // The core workflow: each router names its full paths under /api.
-  app.use('/api', productLineRoutes(), requirementSetRoutes(), revisionRoutes(), candidateRoutes(), assessmentRoutes(), coverageRoutes());
-  app.use('/api', reportRoutes());
   app.all('/api/{*rest}', notFoundApi);
 
   const webDist = config.WEB_DIST ?? path.resolve(import.meta.dirname, '../../web/dist');
