@@ -12,6 +12,12 @@
 // --processes sets API_PROCESSES (default: one per core, the way to run on a
 // machine of its own; see the README's "Scale beyond one machine").
 //
+// The route "floor" (on by default) puts the same load on a bare node:http
+// server in its own process that answers every request with a fixed JSON
+// body: no Express, no session, no database. Its latency is what this
+// machine, its network stack and the load generator allow at best, so the
+// API's figures can be read against it.
+//
 // Without DB_* in the environment it uses the test instance that `npm test`
 // prepares (.data/test, 127.0.0.1:3408, database polecourt_test): run it with
 // that instance up (POLECOURT_KEEP_TEST_DB=1 npm test -- api, or any run in progress).
@@ -34,8 +40,8 @@ const { values: args } = parseArgs({
     auth: { type: 'string', default: 'session' },
     // Writes a V8 CPU profile of the API process into this folder (open it in a browser's devtools).
     profile: { type: 'string' },
-    // Which routes to load: region, assessments or both (comma-separated).
-    routes: { type: 'string', default: 'region,assessments' },
+    // Which routes to load: floor, region, assessments (comma-separated).
+    routes: { type: 'string', default: 'floor,region,assessments' },
     // Seconds of load before each measured run, not counted: a server that has run a while has its code compiled.
     warmup: { type: 'string', default: '3' },
     // The load generator: wrk when installed (apt-get install wrk), else autocannon.
@@ -82,6 +88,23 @@ function startApi(): Promise<{ child: ChildProcess; url: string }> {
     child.stdout!.on('data', onData);
     child.stderr!.on('data', (d: Buffer) => (out += d.toString()));
     child.once('exit', (code) => reject(new Error(`the API exited (${code}) before serving:\n${out}`)));
+  });
+}
+
+// The bare server of the "floor" run (see the top of this file).
+function startFloor(): Promise<{ child: ChildProcess; url: string }> {
+  const server = [
+    "const body = JSON.stringify({ floor: true, points: Array.from({ length: 50 }, (_, i) => ({ re: -i * 1.2345, im: i * 0.5 })) });",
+    "const s = require('node:http').createServer((req, res) => { res.setHeader('content-type', 'application/json'); res.end(body); });",
+    "s.listen(0, '127.0.0.1', () => console.log('floor on http://127.0.0.1:' + s.address().port));",
+  ].join('\n');
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, ['-e', server], { stdio: ['ignore', 'pipe', 'inherit'] });
+    child.stdout!.on('data', (d: Buffer) => {
+      const m = /floor on (http:\/\/\S+)/.exec(d.toString());
+      if (m) resolve({ child, url: m[1]! });
+    });
+    child.once('exit', (code) => reject(new Error(`the floor server exited (${code})`)));
   });
 }
 
@@ -263,6 +286,16 @@ async function main(): Promise<void> {
       body: JSON.stringify({ revisionId: rev.id }),
     };
     const measured: { name: string; target: number; result: LoadResult }[] = [];
+    if (ROUTES.has('floor')) {
+      const floor = await startFloor();
+      try {
+        const opts = { url: `${floor.url}/`, connections: CONNECTIONS, headers: {} };
+        if (WARMUP > 0) await run({ ...opts, duration: WARMUP });
+        report('floor: bare node:http server, fixed body (no Express, session or database)', await run({ ...opts, duration: SECONDS }));
+      } finally {
+        floor.child.kill('SIGTERM');
+      }
+    }
     for (const [key, name, opts, target] of [
       ['region', 'GET /api/revisions/:id/region', regionOpts, 50],
       ['assessments', 'POST /api/candidates/:id/assessments', assessOpts, 100],
