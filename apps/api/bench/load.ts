@@ -70,15 +70,10 @@ function apiEnv(): NodeJS.ProcessEnv {
   return { ...process.env, DB_PORT: '3408', DB_NAME: 'polecourt_test', DB_PASSWORD: s.dbPassword, SESSION_SECRET: s.sessionSecret, POLECOURT_ROOT: ROOT, POLECOURT_DATA_DIR: path.join(ROOT, '.data/test') };
 }
 
-function startApi(): Promise<{ child: ChildProcess; url: string }> {
+// Starts a server in a child process; resolves once it prints "serving on URL".
+function startServer(what: string, nodeArgs: string[], options: { cwd?: string; env?: NodeJS.ProcessEnv } = {}): Promise<{ child: ChildProcess; url: string }> {
   return new Promise((resolve, reject) => {
-    const prof = args.profile ? ['--cpu-prof', '--cpu-prof-dir', path.resolve(args.profile)] : [];
-    const child = spawn(process.execPath, [...prof, '--import', 'tsx', 'src/main.ts'], {
-      cwd: API_DIR,
-      // Sign-in limits lifted: other runs on the same database may have left failed sign-ins of the demo accounts.
-      env: { ...apiEnv(), API_PROCESSES: String(PROCESSES), PORT: '0', SMTP_PORT: '0', S3_PORT: '0', LOG_LEVEL: 'info', NODE_ENV: 'development', MAIL_POLL_MS: '600000', LOGIN_MAX_FAILURES: '10000', LOGIN_MAX_FAILURES_PER_ADDRESS: '100000' },
-      stdio: ['ignore', 'pipe', 'pipe'],
-    });
+    const child = spawn(process.execPath, nodeArgs, { ...options, stdio: ['ignore', 'pipe', 'pipe'] });
     let out = '';
     const onData = (d: Buffer) => {
       out += d.toString();
@@ -87,7 +82,16 @@ function startApi(): Promise<{ child: ChildProcess; url: string }> {
     };
     child.stdout!.on('data', onData);
     child.stderr!.on('data', (d: Buffer) => (out += d.toString()));
-    child.once('exit', (code) => reject(new Error(`the API exited (${code}) before serving:\n${out}`)));
+    child.once('exit', (code) => reject(new Error(`${what} exited (${code}) before serving:\n${out}`)));
+  });
+}
+
+function startApi(): Promise<{ child: ChildProcess; url: string }> {
+  const prof = args.profile ? ['--cpu-prof', '--cpu-prof-dir', path.resolve(args.profile)] : [];
+  return startServer('the API', [...prof, '--import', 'tsx', 'src/main.ts'], {
+    cwd: API_DIR,
+    // Sign-in limits lifted: other runs on the same database may have left failed sign-ins of the demo accounts.
+    env: { ...apiEnv(), API_PROCESSES: String(PROCESSES), PORT: '0', SMTP_PORT: '0', S3_PORT: '0', LOG_LEVEL: 'info', NODE_ENV: 'development', MAIL_POLL_MS: '600000', LOGIN_MAX_FAILURES: '10000', LOGIN_MAX_FAILURES_PER_ADDRESS: '100000' },
   });
 }
 
@@ -96,16 +100,9 @@ function startFloor(): Promise<{ child: ChildProcess; url: string }> {
   const server = [
     "const body = JSON.stringify({ floor: true, points: Array.from({ length: 50 }, (_, i) => ({ re: -i * 1.2345, im: i * 0.5 })) });",
     "const s = require('node:http').createServer((req, res) => { res.setHeader('content-type', 'application/json'); res.end(body); });",
-    "s.listen(0, '127.0.0.1', () => console.log('floor on http://127.0.0.1:' + s.address().port));",
+    "s.listen(0, '127.0.0.1', () => console.log('serving on http://127.0.0.1:' + s.address().port));",
   ].join('\n');
-  return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, ['-e', server], { stdio: ['ignore', 'pipe', 'inherit'] });
-    child.stdout!.on('data', (d: Buffer) => {
-      const m = /floor on (http:\/\/\S+)/.exec(d.toString());
-      if (m) resolve({ child, url: m[1]! });
-    });
-    child.once('exit', (code) => reject(new Error(`the floor server exited (${code})`)));
-  });
+  return startServer('the floor server', ['-e', server]);
 }
 
 interface Session {

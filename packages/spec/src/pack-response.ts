@@ -5,6 +5,7 @@
 // B'_n = sigma B_n - w A_n + (n+1) B_{n+1}.
 import type { ModalForm } from './partial-fractions.js';
 import { magnitude } from './magnitude.js';
+import { transientBound } from './transient-horizon.js';
 
 export const PACKED_LEVELS = 4;
 
@@ -62,7 +63,6 @@ export function packResponse(form: ModalForm, scale: number): PackedResponse {
     maxSpeed: 0,
     chainLimit: 0,
   };
-  let spread = 0;
   let repeated = false;
   let off = 0;
   form.terms.forEach((t, k) => {
@@ -103,11 +103,11 @@ export function packResponse(form: ModalForm, scale: number): PackedResponse {
     }
     if (p.transient[k]) {
       p.maxSpeed = Math.max(p.maxSpeed, p.speed[k] as number);
-      for (let n = 0; n < m; n++) spread += p.bound[off + n] as number;
       if (m > 1) repeated = true;
     }
     off += m;
   });
-  p.chainLimit = repeated ? 0 : Math.min(MAX_CHAIN, Math.floor(CHAIN_ERROR / (2 * 2.220446049250313e-16 * Math.max(spread, 1e-300))));
+  // without repeated poles the sum of the bounds is the transient bound at t = 0
+  p.chainLimit = repeated ? 0 : Math.min(MAX_CHAIN, Math.floor(CHAIN_ERROR / (2 * Number.EPSILON * transientBound(p, 0))));
   return p;
 }

@@ -216,8 +216,7 @@ class Scan {
       } else if (Math.sign(dda) * Math.sign(ddb) < 0 && mayDip(this.d, db, dda, ddb, b - a)) {
         // r' may dip across zero and back inside this step
         const m = refine(p, 2, 0, a, b, dda, ddb);
-        advancePhases(p, probe, m, probe);
-        evalPhases(p, probe, 2, buf);
+        probeAt(p, m, 2);
         const dm = buf[1] as number;
         if (Math.sign(dm) === -this.dir && dm !== 0) {
           const c1 = refine(p, 1, 0, a, m, this.d, dm);
@@ -278,10 +277,16 @@ function levelScale(p: PackedResponse): number {
   return s;
 }
 
+// The response's levels < `levels` at t into buf, the probe's phases moved
+// there from where they last were (a short move costs no exp, cos or sin).
+function probeAt(p: PackedResponse, t: number, levels: number): void {
+  advancePhases(p, probe, t, probe);
+  evalPhases(p, probe, levels, buf);
+}
+
 // r at a point just refined: the probe's phases sit next to it.
 function valueAt(p: PackedResponse, t: number): number {
-  advancePhases(p, probe, t, probe);
-  evalPhases(p, probe, 1, buf);
+  probeAt(p, t, 1);
   return buf[0] as number;
 }
 
@@ -320,8 +325,7 @@ export function refine(p: PackedResponse, level: number, target: number, a: numb
       x -= dx;
       if (Math.abs(dx) <= 1e-12 * Math.abs(x)) return x;
     }
-    advancePhases(p, probe, x, probe);
-    evalPhases(p, probe, level + 2, buf);
+    probeAt(p, x, level + 2);
     f = (buf[level] as number) - target;
     df = buf[level + 1] as number;
     if (f === 0) return x;
