@@ -11,7 +11,7 @@
 // that complete after the warm-up. The whole run's p99 and max are printed
 // beside them, since they include the opening of all the connections at once:
 // a busy Node process accepts one new connection per turn of its event loop
-// (libuv 1.45 and later), so when 100 connections arrive together the last
+// (libuv/libuv#3696), so when 100 connections arrive together the last
 // ones wait for about a hundred turns, which shows in the first second of a
 // run and in nothing after it. wrk (--tool wrk, Debian's package) cannot
 // leave the warm-up out of its figures: with it the warm-up is a run of its
