@@ -213,19 +213,16 @@ function runAutocannon(opts: LoadOptions): Promise<LoadResult> {
         max: round1(latencies[latencies.length - 1] ?? Number.NaN),
         non2xx,
         socketErrors,
-        // autocannon counts timeouts for the whole run only: they count against the measured part.
         timeouts: r.timeouts,
         whole: { p99: r.latency.p99, max: r.latency.max },
       });
     });
+    // Errors count over the whole run, warm-up included: a refused request is one too many at any time.
     instance.on('response', (_client: unknown, status: number, _bytes: number, responseTime: number) => {
-      if (performance.now() < measureFrom) return;
-      latencies.push(responseTime);
       if (status < 200 || status > 299) non2xx++;
+      if (performance.now() >= measureFrom) latencies.push(responseTime);
     });
-    instance.on('reqError', () => {
-      if (performance.now() >= measureFrom) socketErrors++;
-    });
+    instance.on('reqError', () => socketErrors++);
   });
 }
 
