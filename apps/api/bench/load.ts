@@ -258,14 +258,13 @@ function runWrk(opts: LoadOptions): Promise<LoadResult> {
       const m = /FIGURES (\{.*\})/.exec(out);
       if (!m) return reject(new Error(`wrk printed no figures:\n${out}`));
       const f = JSON.parse(m[1]!) as Record<string, number>;
-      const round = (ms: number) => Math.round(ms * 10) / 10;
       resolve({
         requestsPerSecond: f.requests! / f.seconds!,
         total: f.requests!,
-        p50: round(f.p50!),
-        p90: round(f.p90!),
-        p99: round(f.p99!),
-        max: round(f.max!),
+        p50: round1(f.p50!),
+        p90: round1(f.p90!),
+        p99: round1(f.p99!),
+        max: round1(f.max!),
         non2xx: f.status!,
         socketErrors: f.connect! + f.read! + f.write!,
         timeouts: f.timeout!,

@@ -3,6 +3,7 @@ import { scaleLinear } from 'd3-scale';
 import { axisTicks, formatTick } from './axis-ticks.js';
 import { formatCoordinate as f } from './format-coordinate.js';
 import { formatValue } from './format-value.js';
+import { labelWidth } from './label-width.js';
 import { arrowPath, circlePath, crossPath, rectPath } from './mark-paths.js';
 import { plotFrame } from './plot-frame.js';
 import { polylinePath } from './polyline-path.js';
@@ -125,17 +126,10 @@ function resample(points: Point[], spacing: number): Point[] {
   return out;
 }
 
-/**
- * The s-plane plot as pixel geometry for a width x height box: the shaded
- * admissible region, each limit's boundary with a keyed label anchor, poles
- * as x and zeros as o, a ring on each dominant pole, the dominance threshold
- * (ratio times the dominant real part) as a vertical line, grid and ticks.
- * Real part to the right, imaginary part up; pixels grow right and down.
- */
 // To the right of the threshold line, or to its left when the frame's right
-// edge would cut it there (text width estimated at 0.55 em a character).
+// edge would cut it there (label-width.ts).
 function thresholdLabel(lx: number, frame: { x: number; y: number; width: number }, text: string, fontSize: number): Label {
-  const width = text.length * fontSize * 0.55;
+  const width = labelWidth(text, fontSize);
   const fitsRight = lx + 4 + width <= frame.x + frame.width;
   const fitsLeft = lx - 4 - width >= frame.x;
   return !fitsRight && fitsLeft
@@ -143,6 +137,13 @@ function thresholdLabel(lx: number, frame: { x: number; y: number; width: number
     : { x: lx + 4, y: frame.y + 4, text, anchor: 'start', baseline: 'top' };
 }
 
+/**
+ * The s-plane plot as pixel geometry for a width x height box: the shaded
+ * admissible region, each limit's boundary with a keyed label anchor, poles
+ * as x and zeros as o, a ring on each dominant pole, the dominance threshold
+ * (ratio times the dominant real part) as a vertical line, grid and ticks.
+ * Real part to the right, imaginary part up; pixels grow right and down.
+ */
 export function splanePlot(input: SplanePlotInput): SplanePlot {
   const { width, height } = input;
   const frame = plotFrame(width, height, input.margin);

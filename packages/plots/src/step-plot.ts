@@ -3,6 +3,7 @@ import { scaleLinear } from 'd3-scale';
 import { axisTicks, formatTick } from './axis-ticks.js';
 import { formatCoordinate as f } from './format-coordinate.js';
 import { formatValue } from './format-value.js';
+import { labelWidth } from './label-width.js';
 import { rectPath } from './mark-paths.js';
 import { plotFrame } from './plot-frame.js';
 import { polylinePath } from './polyline-path.js';
@@ -142,7 +143,7 @@ export function stepPlot(input: StepPlotInput): StepPlot {
   let row = 0;
   for (const v of verticals) {
     const gx = X(v.value);
-    const textWidth = v.text.length * fontSize * 0.55;
+    const textWidth = labelWidth(v.text, fontSize);
     const flip = gx + 4 + textWidth > right; // near the right edge the text goes to the line's left
     const start = flip ? gx - 4 - textWidth : gx + 4;
     row = start < lastEnd + 6 ? row + 1 : 0;
@@ -166,24 +167,23 @@ export function stepPlot(input: StepPlotInput): StepPlot {
       const b = X(Math.min(t90, tMax));
       const d = `M${f(a)},${f(gy)}L${f(b)},${f(gy)}M${f(a)},${f(gy - 4)}L${f(a)},${f(gy + 4)}M${f(b)},${f(gy - 4)}L${f(b)},${f(gy + 4)}`;
       const text = `rise-time limit ${formatValue(input.maxRiseTime)} s (10-90 %)`;
-      const width = text.length * fontSize * 0.55;
+      const width = labelWidth(text, fontSize);
       // Right of the span, left of it, or right of a vertical guide (peak or
       // settling line) past the span: the first place with room that no
       // vertical guide crosses, else the first place with room.
       const lines = guides.filter((g) => g.kind === 'peak' || g.kind === 'settling').map((g) => X(g.value));
       const startAt = (x0: number) => ({ label: { x: x0, y: gy, text, anchor: 'start', baseline: 'middle' } as Label, from: x0, to: x0 + width });
-      const sides = [
-        startAt(b + 5),
-        { label: { x: a - 5, y: gy, text, anchor: 'end', baseline: 'middle' } as Label, from: a - 5 - width, to: a - 5 },
-        ...lines.filter((gx) => gx > b).sort((p, q) => p - q).map((gx) => startAt(gx + 5)),
-      ].filter((c) => c.from >= left && c.to <= right);
+      const leftOfSpan = { label: { x: a - 5, y: gy, text, anchor: 'end', baseline: 'middle' } as Label, from: a - 5 - width, to: a - 5 };
+      const sides = [startAt(b + 5), leftOfSpan, ...lines.filter((gx) => gx > b).sort((p, q) => p - q).map((gx) => startAt(gx + 5))].filter(
+        (c) => c.from >= left && c.to <= right,
+      );
       const crossed = (c: { from: number; to: number }) => lines.some((gx) => gx >= c.from - 3 && gx <= c.to + 3);
-      const side = sides.find((c) => !crossed(c)) ?? sides[0];
+      const side = sides.find((c) => !crossed(c)) ?? sides[0] ?? leftOfSpan;
       guides.push({
         kind: 'rise',
         value: input.maxRiseTime,
         d,
-        label: side?.label ?? { x: a - 5, y: gy, text, anchor: 'end', baseline: 'middle' },
+        label: side.label,
       });
     }
   }

@@ -136,8 +136,7 @@ export class Layout {
     this.doc.text(text, left, y, { lineBreak: false, features: FEATURES });
   }
 
-  /** A plot label placed by its anchor and baseline (the plots package's convention). */
-  /** A plot label at (ox + l.x, oy + l.y); `backdrop` fills a box of that colour under it, so lines it crosses do not run through the text. */
+  /** A plot label at (ox + l.x, oy + l.y), placed by its anchor and baseline (the plots package's convention); `backdrop` fills a box of that colour under it, so lines it crosses do not run through the text. */
   label(l: Label, ox: number, oy: number, s: TextStyle = {}, backdrop?: string): void {
     this.style(s);
     const w = this.doc.widthOfString(l.text, { features: FEATURES });
