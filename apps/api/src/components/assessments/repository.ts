@@ -2,6 +2,7 @@ import { QueryTypes, type Transaction } from 'sequelize';
 
 import type { RevisionStatus } from '@polecourt/contracts';
 
+import { bindRows } from '../../lib/bind-rows.js';
 import { getSequelize } from '../../lib/transaction.js';
 import { AssessmentModel } from './model.js';
 
@@ -85,11 +86,11 @@ export const assessmentRepository = {
   async createMany(rows: (NewAssessment & { createdAt?: Date })[], transaction: Transaction): Promise<number[]> {
     if (rows.length === 0) return [];
     const now = new Date();
-    const replacements = rows.flatMap((d) => [d.candidateId, d.revisionId, d.revisionSha256, d.engineVersion, d.verdict, JSON.stringify(d.result), d.createdBy, d.createdAt ?? now]);
+    const bind = rows.flatMap((d) => [d.candidateId, d.revisionId, d.revisionSha256, d.engineVersion, d.verdict, JSON.stringify(d.result), d.createdBy, d.createdAt ?? now]);
     const inserted = await getSequelize().query<{ id: number }>(
       `INSERT INTO assessments (candidate_id, revision_id, revision_sha256, engine_version, verdict, result_json, created_by, created_at)
-       VALUES ${rows.map(() => '(?, ?, ?, ?, ?, ?, ?, ?)').join(', ')} RETURNING id`,
-      { replacements, type: QueryTypes.SELECT, transaction },
+       VALUES ${bindRows(rows.length, 8)} RETURNING id`,
+      { bind, type: QueryTypes.SELECT, transaction },
     );
     if (inserted.length !== rows.length) throw new Error(`inserted ${inserted.length} assessments of ${rows.length}`);
     return inserted.map((r) => Number(r.id));

@@ -1,6 +1,7 @@
 import { Op, QueryTypes, type Transaction, type WhereOptions } from 'sequelize';
 
 import { canonicalJson } from '../../lib/canonical-json.js';
+import { bindRows } from '../../lib/bind-rows.js';
 import { getSequelize } from '../../lib/transaction.js';
 import { chainHash, chainedFieldsOf, type ChainedFields } from './chain-hash.js';
 import { AuditEventModel, AuditHeadModel } from './model.js';
@@ -126,9 +127,9 @@ export const auditRepository = {
       const chunk = links.slice(from, from + INSERT_CHUNK);
       const rows = await sequelize.query<{ id: number }>(
         `INSERT INTO audit_events (occurred_at, actor_id, actor_email, action, entity_type, entity_id, product_line_id, before_json, after_json, prev_hash, hash)
-         VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')} RETURNING id`,
+         VALUES ${bindRows(chunk.length, 11)} RETURNING id`,
         {
-          replacements: chunk.flatMap(({ occurredAt, fields: f, prevHash: prev, hash }) => [occurredAt, f.actorId, f.actorEmail, f.action, f.entityType, f.entityId, f.productLineId, f.beforeJson, f.afterJson, prev, hash]),
+          bind: chunk.flatMap(({ occurredAt, fields: f, prevHash: prev, hash }) => [occurredAt, f.actorId, f.actorEmail, f.action, f.entityType, f.entityId, f.productLineId, f.beforeJson, f.afterJson, prev, hash]),
           type: QueryTypes.SELECT,
           transaction,
         },
