@@ -40,6 +40,9 @@ import autocannon from 'autocannon';
 
 import { evaluate, regionBounds, regionPolygons } from '@polecourt/spec';
 
+import { cpuShare, cpuSnapshot, type CpuShare, type CpuSnapshot } from './cpu-share.js';
+import { probeDisk, type DiskProbe } from './disk-probe.js';
+
 const { values: args } = parseArgs({
   // `pnpm bench:robustness -- --seconds 5` hands the `--` on: skip it.
   args: process.argv.slice(2).filter((a) => a !== '--'),
@@ -77,6 +80,11 @@ function apiEnv(): NodeJS.ProcessEnv {
   if (!existsSync(secretsFile)) throw new Error('No DB_* settings and no .data/test/secrets.json: run `npm test` once (POLECOURT_KEEP_TEST_DB=1 keeps its database up).');
   const s = JSON.parse(readFileSync(secretsFile, 'utf8')) as { dbPassword: string; sessionSecret: string };
   return { ...process.env, DB_PORT: '3408', DB_NAME: 'polecourt_test', DB_PASSWORD: s.dbPassword, SESSION_SECRET: s.sessionSecret, POLECOURT_ROOT: ROOT, POLECOURT_DATA_DIR: path.join(ROOT, '.data/test') };
+}
+
+/** The folder of the database's files (the test instance's unless DB_* and POLECOURT_DATA_DIR say otherwise). */
+function dataDir(): string {
+  return apiEnv().POLECOURT_DATA_DIR ?? path.join(ROOT, '.data/test');
 }
 
 // Starts a server in a child process; resolves once it prints "serving on URL".
@@ -171,6 +179,8 @@ interface LoadResult {
   timeouts: number;
   /** Set when the figures leave the warm-up out: the whole run's tail, connection opening included. */
   whole?: { p99: number; max: number };
+  /** CPU used over the measured seconds (Linux only). */
+  cpu?: CpuShare | null;
 }
 
 interface LoadOptions {
@@ -183,6 +193,8 @@ interface LoadOptions {
   duration: number;
   /** Seconds of the same load before them, on the same connections (autocannon) or in a run of their own (wrk). */
   warmup: number;
+  /** The API's process, whose tree's CPU is counted over the measured seconds. */
+  apiPid?: number;
 }
 
 const round1 = (ms: number) => Math.round(ms * 10) / 10;
@@ -200,8 +212,12 @@ function runAutocannon(opts: LoadOptions): Promise<LoadResult> {
     const latencies: number[] = [];
     let non2xx = 0;
     let socketErrors = 0;
-    const { warmup: _warmup, ...cannon } = opts;
+    const { warmup: _warmup, apiPid, ...cannon } = opts;
+    let cpuFrom: CpuSnapshot | null = null;
+    const cpuTimer = setTimeout(() => (cpuFrom = apiPid === undefined ? null : cpuSnapshot(apiPid)), opts.warmup * 1000);
     const instance = autocannon({ ...cannon, duration: opts.warmup + opts.duration }, (err, r) => {
+      clearTimeout(cpuTimer);
+      const cpu = apiPid === undefined ? null : cpuShare(cpuFrom, cpuSnapshot(apiPid), latencies.length, os.availableParallelism());
       if (err) return reject(err);
       latencies.sort((x, y) => x - y);
       resolve({
@@ -215,6 +231,7 @@ function runAutocannon(opts: LoadOptions): Promise<LoadResult> {
         socketErrors,
         timeouts: r.timeouts,
         whole: { p99: r.latency.p99, max: r.latency.max },
+        cpu,
       });
     });
     // Errors count over the whole run, warm-up included: a refused request is one too many at any time.
@@ -247,6 +264,7 @@ function runWrk(opts: LoadOptions): Promise<LoadResult> {
       'end',
     ].join('\n'),
   );
+  const cpuFrom = opts.apiPid === undefined ? null : cpuSnapshot(opts.apiPid);
   return new Promise((resolve, reject) => {
     const child = spawn('wrk', ['-t1', `-c${opts.connections}`, `-d${opts.duration}s`, '--timeout', '10s', '-s', script, opts.url], { stdio: ['ignore', 'pipe', 'pipe'] });
     let out = '';
@@ -258,6 +276,8 @@ function runWrk(opts: LoadOptions): Promise<LoadResult> {
       const m = /FIGURES (\{.*\})/.exec(out);
       if (!m) return reject(new Error(`wrk printed no figures:\n${out}`));
       const f = JSON.parse(m[1]!) as Record<string, number>;
+      // wrk is a process of its own, not counted as this one's CPU.
+      const share = opts.apiPid === undefined ? null : cpuShare(cpuFrom, cpuSnapshot(opts.apiPid), f.requests!, os.availableParallelism());
       resolve({
         requestsPerSecond: f.requests! / f.seconds!,
         total: f.requests!,
@@ -268,6 +288,7 @@ function runWrk(opts: LoadOptions): Promise<LoadResult> {
         non2xx: f.status!,
         socketErrors: f.connect! + f.read! + f.write!,
         timeouts: f.timeout!,
+        cpu: share && { ...share, generatorCores: Number.NaN },
       });
     });
   });
@@ -286,6 +307,11 @@ function report(name: string, r: LoadResult): void {
       `errors ${errors} (non-2xx ${r.non2xx}, socket errors ${r.socketErrors}, timeouts ${r.timeouts})` +
       (r.whole ? `; whole run with the warm-up and the opening of the connections: p99 ${r.whole.p99} ms, max ${r.whole.max} ms` : ''),
   );
+  if (r.cpu) {
+    const c = r.cpu;
+    const generator = Number.isNaN(c.generatorCores) ? '' : `, load generator ${c.generatorCores.toFixed(2)}`;
+    console.log(`  CPU over the measured seconds, in cores: server ${c.apiCores.toFixed(2)} (${c.apiMsPerResponse.toFixed(3)} ms per response)${generator}, whole machine ${c.machineCores.toFixed(2)} of ${os.availableParallelism()}`);
+  }
 }
 
 const load = () => os.loadavg().map((v) => v.toFixed(2)).join(' ');
@@ -327,7 +353,7 @@ async function main(): Promise<void> {
       const floor = await startFloor();
       try {
         const opts = { url: `${floor.url}/`, connections: CONNECTIONS, headers: {} };
-        report('floor: bare node:http server, fixed body (no Express, session or database)', await run({ ...opts, duration: SECONDS, warmup: WARMUP }));
+        report('floor: bare node:http server, fixed body (no Express, session or database)', await run({ ...opts, duration: SECONDS, warmup: WARMUP, apiPid: floor.child.pid! }));
       } finally {
         floor.child.kill('SIGTERM');
       }
@@ -337,8 +363,16 @@ async function main(): Promise<void> {
       ['assessments', 'POST /api/candidates/:id/assessments', assessOpts, 100],
     ] as const) {
       if (!ROUTES.has(key)) continue;
-      const result = await run({ ...opts, duration: SECONDS, warmup: WARMUP });
+      // Assessments commit durably: the data disk's flush times go beside their figures.
+      let disk: Promise<DiskProbe | null> | null = null;
+      const probeTimer = key === 'assessments' ? setTimeout(() => (disk = probeDisk(dataDir(), SECONDS * 1000)), WARMUP * 1000) : null;
+      const result = await run({ ...opts, duration: SECONDS, warmup: WARMUP, apiPid: child.pid! });
+      if (probeTimer) clearTimeout(probeTimer);
       report(name, result);
+      const d = await (disk as Promise<DiskProbe | null> | null);
+      if (d) {
+        console.log(`  data disk over the measured seconds: a 4 KB write made durable (fdatasync) took p50 ${round1(d.p50)} ms, p99 ${round1(d.p99)} ms, max ${round1(d.max)} ms (${d.flushes} flushes)`);
+      }
       measured.push({ name, target, result });
     }
     if (WARMUP > 0) {
