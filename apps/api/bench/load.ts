@@ -5,6 +5,7 @@
 //
 //   pnpm --filter @polecourt/api bench:load [--seconds 20] [--connections 100] [--auth session|token]
 //     [--routes region,assessments] [--warmup 3] [--profile DIR] [--tool autocannon|wrk] [--processes N]
+//     [--node-args="NODE OPTIONS"]
 //
 // How a route is measured (autocannon, the default): one run of warm-up plus
 // measured seconds on the same connections; the figures count the responses
@@ -60,6 +61,8 @@ const { values: args } = parseArgs({
     tool: { type: 'string', default: 'autocannon' },
     // API processes (API_PROCESSES); default one per core.
     processes: { type: 'string' },
+    // Extra Node or V8 options for the API processes (space-separated), to try one: --node-args="--max-semi-space-size=64" (with the =, since the value starts with a dash).
+    'node-args': { type: 'string', default: '' },
   },
 });
 const SECONDS = Number(args.seconds);
@@ -92,20 +95,32 @@ function startServer(what: string, nodeArgs: string[], options: { cwd?: string; 
   return new Promise((resolve, reject) => {
     const child = spawn(process.execPath, nodeArgs, { ...options, stdio: ['ignore', 'pipe', 'pipe'] });
     let out = '';
+    let serving = false;
+    // Output is kept (for the error below) only until the server serves: this
+    // process is the load generator, and a server that writes much
+    // (--node-args=--trace-gc) must not cost it a growing string and its scans.
     const onData = (d: Buffer) => {
+      if (serving) return;
       out += d.toString();
       const m = /serving on (http:\/\/\S+)/.exec(out);
-      if (m) resolve({ child, url: m[1]! });
+      if (m) {
+        serving = true;
+        out = '';
+        resolve({ child, url: m[1]! });
+      }
     };
     child.stdout!.on('data', onData);
-    child.stderr!.on('data', (d: Buffer) => (out += d.toString()));
+    child.stderr!.on('data', (d: Buffer) => {
+      if (!serving) out += d.toString();
+    });
     child.once('exit', (code) => reject(new Error(`${what} exited (${code}) before serving:\n${out}`)));
   });
 }
 
 function startApi(): Promise<{ child: ChildProcess; url: string }> {
   const prof = args.profile ? ['--cpu-prof', '--cpu-prof-dir', path.resolve(args.profile)] : [];
-  return startServer('the API', [...prof, '--import', 'tsx', 'src/main.ts'], {
+  const extra = args['node-args'].split(' ').filter((a) => a !== '');
+  return startServer('the API', [...prof, ...extra, '--import', 'tsx', 'src/main.ts'], {
     cwd: API_DIR,
     // Sign-in limits lifted: other runs on the same database may have left failed sign-ins of the demo accounts.
     env: { ...apiEnv(), API_PROCESSES: String(PROCESSES), PORT: '0', SMTP_PORT: '0', S3_PORT: '0', LOG_LEVEL: 'info', NODE_ENV: 'development', MAIL_POLL_MS: '600000', LOGIN_MAX_FAILURES: '10000', LOGIN_MAX_FAILURES_PER_ADDRESS: '100000' },
