@@ -25,6 +25,7 @@ import type { Config } from './config.js';
 import { csrfGuard, loadUser } from './lib/auth-middleware.js';
 import { contentTypeGuard } from './lib/content-type-guard.js';
 import { errorMiddleware, notFoundApi } from './lib/error-middleware.js';
+import { middlewareChain } from './lib/middleware-chain.js';
 import { LeanSessionStore } from './lib/session-store.js';
 import './lib/request-context.js';
 
@@ -71,29 +72,32 @@ export function buildApp(config: Config, sequelize: Sequelize): BuiltApp {
     expiration: config.SESSION_MAX_AGE_HOURS * 3600 * 1000,
   });
 
+  // One router layer for all six (lib/middleware-chain.ts says why).
   app.use(
     '/api',
-    contentTypeGuard,
-    express.json({ limit: '1mb' }),
-    session({
-      name: SESSION_COOKIE,
-      secret: config.SESSION_SECRET,
-      store,
-      resave: false,
-      saveUninitialized: false,
-      rolling: true,
-      proxy: config.TRUST_PROXY,
-      cookie: {
-        httpOnly: true,
-        sameSite: 'lax',
-        secure: config.COOKIE_SECURE,
-        maxAge: config.SESSION_MAX_AGE_HOURS * 3600 * 1000,
-        path: '/',
-      },
-    }),
-    loadTokenUser,
-    loadUser,
-    csrfGuard,
+    middlewareChain(
+      contentTypeGuard,
+      express.json({ limit: '1mb' }),
+      session({
+        name: SESSION_COOKIE,
+        secret: config.SESSION_SECRET,
+        store,
+        resave: false,
+        saveUninitialized: false,
+        rolling: true,
+        proxy: config.TRUST_PROXY,
+        cookie: {
+          httpOnly: true,
+          sameSite: 'lax',
+          secure: config.COOKIE_SECURE,
+          maxAge: config.SESSION_MAX_AGE_HOURS * 3600 * 1000,
+          path: '/',
+        },
+      }),
+      loadTokenUser,
+      loadUser,
+      csrfGuard,
+    ),
   );
 
   // The core workflow: each router names its full paths under /api. It comes
