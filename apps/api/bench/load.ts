@@ -35,6 +35,7 @@ import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { setTimeout as delay } from 'node:timers/promises';
 import { parseArgs } from 'node:util';
 
 import autocannon from 'autocannon';
@@ -42,7 +43,7 @@ import autocannon from 'autocannon';
 import { evaluate, regionBounds, regionPolygons } from '@polecourt/spec';
 
 import { cpuShare, cpuSnapshot, type CpuShare, type CpuSnapshot } from './cpu-share.js';
-import { probeDisk, type DiskProbe } from './disk-probe.js';
+import { probeDisk } from './disk-probe.js';
 
 const { values: args } = parseArgs({
   // `pnpm bench:robustness -- --seconds 5` hands the `--` on: skip it.
@@ -379,12 +380,10 @@ async function main(): Promise<void> {
     ] as const) {
       if (!ROUTES.has(key)) continue;
       // Assessments commit durably: the data disk's flush times go beside their figures.
-      let disk: Promise<DiskProbe | null> | null = null;
-      const probeTimer = key === 'assessments' ? setTimeout(() => (disk = probeDisk(dataDir(), SECONDS * 1000)), WARMUP * 1000) : null;
+      const disk = key === 'assessments' ? delay(WARMUP * 1000).then(() => probeDisk(dataDir(), SECONDS * 1000)) : null;
       const result = await run({ ...opts, duration: SECONDS, warmup: WARMUP, apiPid: child.pid! });
-      if (probeTimer) clearTimeout(probeTimer);
       report(name, result);
-      const d = await (disk as Promise<DiskProbe | null> | null);
+      const d = await disk;
       if (d) {
         console.log(`  data disk over the measured seconds: a 4 KB write made durable (fdatasync) took p50 ${round1(d.p50)} ms, p99 ${round1(d.p99)} ms, max ${round1(d.max)} ms (${d.flushes} flushes)`);
       }

@@ -1,7 +1,7 @@
 import { Op, QueryTypes, type Transaction, type WhereOptions } from 'sequelize';
 
-import { canonicalJson } from '../../lib/canonical-json.js';
 import { bindRows } from '../../lib/bind-rows.js';
+import { canonicalJson } from '../../lib/canonical-json.js';
 import { getSequelize } from '../../lib/transaction.js';
 import { chainHash, chainedFieldsOf, type ChainedFields } from './chain-hash.js';
 import { AuditEventModel, AuditHeadModel } from './model.js';
