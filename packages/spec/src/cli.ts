@@ -121,55 +121,92 @@ function write(text: string): Promise<void> {
 
 // Streams the designs chunk by chunk (not line by line through readline, whose
 // per-line promises cost more than the assessments) and cuts them into blocks
-// of lines. Inputs of more than one block are assessed on worker threads, one
-// per core, with a bounded number of blocks in flight; output is written in
-// input order, so memory stays bounded and order follows the input.
-const BLOCK_LINES = 1000;
+// of lines. This thread assesses blocks too: a block goes to a worker thread
+// (one per further core) that is online and has fewer than two blocks in hand,
+// otherwise this thread assesses it at once. So the work starts before any
+// worker is up (a worker takes 100 to 200 ms to start on a small machine), and
+// the workers need not be kept busy by a thread that is itself waiting.
+// Output is written in input order with a bounded number of blocks held, so
+// memory stays bounded.
+const BLOCK_LINES = 250;
+const BLOCKS_PER_WORKER = 2;
+
+interface Held {
+  result: BlockResult | null;
+  wait: Promise<BlockResult>;
+}
+
+interface PoolWorker {
+  worker: Worker;
+  online: boolean;
+  failed: boolean;
+  /** Blocks sent and not yet answered: id -> the block, kept to assess it here if the worker fails. */
+  blocks: Map<number, { lines: string[]; first: number; done: (r: BlockResult) => void }>;
+}
 
 class BlockPool {
-  private workers: Worker[] = [];
-  private next = 0;
+  private workers: PoolWorker[] = [];
   private seq = 0;
-  private waiting = new Map<number, (r: BlockResult) => void>();
 
   constructor(
-    readonly size: number,
-    req: ResolvedRequirements | null,
+    size: number,
+    private readonly req: ResolvedRequirements | null,
   ) {
     for (let i = 0; i < size; i++) {
       // A young generation allowed to grow to 96 MB lets a worker
       // collect garbage less often while a block's output strings are alive:
       // about 5 % off a 10,000-design batch here, no change in peak memory.
-      const w = new Worker(new URL('./batch-worker.js', import.meta.url), {
+      const worker = new Worker(new URL('./batch-worker.js', import.meta.url), {
         workerData: { req },
         resourceLimits: { maxYoungGenerationSizeMb: 96 },
       });
-      w.on('message', (m: BlockResult & { id: number }) => {
-        const done = this.waiting.get(m.id);
-        this.waiting.delete(m.id);
-        done?.(m);
+      const pw: PoolWorker = { worker, online: false, failed: false, blocks: new Map() };
+      worker.on('online', () => {
+        pw.online = true;
       });
-      w.on('error', (e) => {
-        for (const done of this.waiting.values()) done({ text: '', allGood: false, internalErrors: [`worker failed: ${e.message}`] });
-        this.waiting.clear();
+      worker.on('message', (m: BlockResult & { id: number }) => {
+        const block = pw.blocks.get(m.id);
+        pw.blocks.delete(m.id);
+        block?.done({ text: m.text, allGood: m.allGood, internalErrors: m.internalErrors });
       });
-      this.workers.push(w);
+      // A worker that fails or stops loses nothing: its blocks are assessed here instead.
+      const takeBack = (why: string): void => {
+        pw.failed = true;
+        if (pw.blocks.size === 0) return;
+        process.stderr.write(`polecourt: a worker thread ${why}; its blocks are assessed on the main thread\n`);
+        const blocks = [...pw.blocks.values()];
+        pw.blocks.clear();
+        for (const block of blocks) block.done(assessJsonBlock(block.lines, block.first, this.req));
+      };
+      worker.on('error', (e) => takeBack(`failed (${e.message})`));
+      worker.on('exit', (code) => takeBack(`stopped (exit code ${code})`));
+      this.workers.push(pw);
     }
   }
 
-  run(lines: string[], first: number): Promise<BlockResult> {
+  /** Sends the block to a worker that can take it now, or returns null. */
+  offer(lines: string[], first: number): Promise<BlockResult> | null {
+    let best: PoolWorker | null = null;
+    for (const pw of this.workers) {
+      if (!pw.online || pw.failed || pw.blocks.size >= BLOCKS_PER_WORKER) continue;
+      if (!best || pw.blocks.size < best.blocks.size) best = pw;
+    }
+    if (!best) return null;
     const id = this.seq++;
-    const w = this.workers[this.next++ % this.workers.length] as Worker;
-    return new Promise((resolve) => {
-      this.waiting.set(id, resolve);
-      w.postMessage({ id, lines, first });
+    const pw = best;
+    return new Promise((done) => {
+      pw.blocks.set(id, { lines, first, done });
+      pw.worker.postMessage({ id, lines, first });
     });
   }
 
   async close(): Promise<void> {
-    await Promise.all(this.workers.map((w) => w.terminate()));
+    await Promise.all(this.workers.map((pw) => pw.worker.terminate()));
   }
 }
+
+/** Lets events that arrived meanwhile (a worker's answer) be handled. */
+const yieldToEvents = (): Promise<void> => new Promise((resolve) => setImmediate(resolve));
 
 async function runBatch(file: string, req: ResolvedRequirements | null): Promise<number> {
   let stream: NodeJS.ReadableStream;
@@ -185,18 +222,25 @@ async function runBatch(file: string, req: ResolvedRequirements | null): Promise
   }
   const decoder = new StringDecoder('utf8');
   const threads = Math.max(1, Math.min(availableParallelism(), 8));
+  const maxHeld = 8 * threads;
   let pool: BlockPool | null = null;
   let allGood = true;
   let rest = '';
   let block: string[] = [];
   let nextLine = 1;
-  const inflight: Promise<BlockResult>[] = [];
+  const held: Held[] = [];
 
-  const flushOne = async (): Promise<void> => {
-    const r = await (inflight.shift() as Promise<BlockResult>);
+  const emit = async (r: BlockResult): Promise<void> => {
     if (!r.allGood) allGood = false;
     for (const m of r.internalErrors) process.stderr.write(`polecourt: ${m}\n`);
     if (r.text) await write(r.text);
+  };
+  const emitReady = async (): Promise<void> => {
+    while (held.length > 0 && held[0]?.result) await emit((held.shift() as Held).result as BlockResult);
+  };
+  const emitOldest = async (): Promise<void> => {
+    const h = held.shift() as Held;
+    await emit(h.result ?? (await h.wait));
   };
   const dispatch = async (final: boolean): Promise<void> => {
     const lines = block;
@@ -204,9 +248,19 @@ async function runBatch(file: string, req: ResolvedRequirements | null): Promise
     block = [];
     nextLine += lines.length;
     // A single short input stays on this thread: no worker start-up to pay.
-    if (!pool && !final && threads > 1) pool = new BlockPool(threads, req);
-    inflight.push(pool ? pool.run(lines, first) : Promise.resolve(assessJsonBlock(lines, first, req)));
-    if (inflight.length >= 2 * threads) await flushOne();
+    if (!pool && !final && threads > 1) pool = new BlockPool(threads - 1, req);
+    const sent = pool?.offer(lines, first) ?? null;
+    if (sent) {
+      const h: Held = { result: null, wait: sent };
+      sent.then((r) => (h.result = r), () => undefined);
+      held.push(h);
+    } else {
+      const result = assessJsonBlock(lines, first, req);
+      held.push({ result, wait: Promise.resolve(result) });
+      if (pool) await yieldToEvents();
+    }
+    await emitReady();
+    if (held.length >= maxHeld) await emitOldest();
   };
   const take = async (text: string, final: boolean): Promise<void> => {
     const lines = (rest + text).split('\n');
@@ -223,7 +277,7 @@ async function runBatch(file: string, req: ResolvedRequirements | null): Promise
     }
     await take(decoder.end(), true);
     if (block.length > 0) await dispatch(true);
-    while (inflight.length > 0) await flushOne();
+    while (held.length > 0) await emitOldest();
   } finally {
     await (pool as BlockPool | null)?.close();
   }
