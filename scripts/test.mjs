@@ -4,14 +4,10 @@ import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { spawnSync } from 'node:child_process';
 
-import { buildAll } from './lib/build.mjs';
-import { apiEnv, tsxBin } from './lib/env.mjs';
-import { ensureDatabase, instance, secrets, startMariadb, stopMariadb } from './lib/mariadb.mjs';
-import { run, step } from './lib/run.mjs';
-import { ensureDebianTools, ensurePnpm, ensureWorkspace } from './lib/tools.mjs';
+import { prepareTestInstance } from './lib/test-instance.mjs';
+import { step } from './lib/run.mjs';
 
 const root = path.resolve(import.meta.dirname, '..');
-const dbPort = Number(process.env.POLECOURT_TEST_DB_PORT ?? 3408);
 const resultsDir = path.join(root, '.test-results');
 
 // Suites in the order they run; `needsDb` ones get the test database.
@@ -26,30 +22,10 @@ const suites = [
 
 async function main() {
   const only = process.argv.slice(2);
-  ensurePnpm();
-  ensureWorkspace(root);
-  ensureDebianTools({ forTests: true });
-
-  const inst = instance(root, 'test', dbPort);
-  const secret = secrets(inst);
-  const startedDb = await startMariadb(inst);
+  const { env, close } = await prepareTestInstance(root);
   let totals = { passed: 0, failed: 0, skipped: 0 };
   const problems = [];
   try {
-    ensureDatabase(inst, { database: 'polecourt_test', user: 'polecourt', password: secret.dbPassword, fresh: true });
-    const env = apiEnv(root, inst, secret, {
-      NODE_ENV: 'test',
-      DB_NAME: 'polecourt_test',
-      LOG_LEVEL: 'silent',
-      POLECOURT_TEST_DB_DIR: inst.dir,
-      POLECOURT_TEST_DB_PORT: String(inst.port),
-    });
-    const api = path.join(root, 'apps/api');
-    step('migrating and seeding the test database');
-    run(tsxBin(root), ['src/db/migrate-cli.ts', 'up'], { cwd: api, env });
-    run(tsxBin(root), ['src/db/migrate-cli.ts', 'seed'], { cwd: api, env });
-    if (!process.env.POLECOURT_SKIP_BUILD) buildAll(root);
-
     rmSync(resultsDir, { recursive: true, force: true });
     mkdirSync(resultsDir, { recursive: true });
     for (const suite of suites) {
@@ -82,7 +58,7 @@ async function main() {
       }
     }
   } finally {
-    if (startedDb && !process.env.POLECOURT_KEEP_TEST_DB) await stopMariadb(inst);
+    await close();
   }
   for (const p of problems) console.log(`problem: ${p}`);
   console.log(`\n${totals.passed} passed, ${totals.failed} failed${totals.skipped ? `, ${totals.skipped} skipped` : ''}`);

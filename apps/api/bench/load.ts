@@ -30,7 +30,8 @@
 //
 // Without DB_* in the environment it uses the test instance that `npm test`
 // prepares (.data/test, 127.0.0.1:3408, database polecourt_test): run it with
-// that instance up (POLECOURT_KEEP_TEST_DB=1 npm test -- api, or any run in progress).
+// that instance up (POLECOURT_KEEP_TEST_DB=1 npm test -- api, or any run in progress),
+// or run it through `pnpm bench:robustness`, which sets the instance up first.
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
