@@ -28,6 +28,23 @@ describe('partialFractions', () => {
     assertClose(c[2], -1 / (2 * a), 1e-14);
   });
 
+  it('a conjugate pair just too far apart to be clustered keeps its imaginary part (no equal real poles, no NaN)', () => {
+    // -100 +/- 0.001j: the pair is 2e-5 of |p| apart, outside the 1e-5
+    // cluster tolerance, while its imaginary part alone is 1e-5 of |p|.
+    // (A property test found this: before, both poles were snapped to one
+    // real value, counted once each, and the residues came out NaN.)
+    // Near coincidence the response tends to the double pole's transform pair
+    // above: 1/(s (s+a)^2) <-> (1 - e^{-at} - a t e^{-at}) / a^2.
+    const a = 99.99999999500001;
+    const w = 0.0010000000000000002;
+    const model = parseDesign({ poles: [{ re: -a, im: w }, { re: -a, im: -w }], gain: a * a + w * w });
+    const form = partialFractions(model);
+    for (const term of form.terms) for (const c of [...term.cos, ...term.sin]) expect(Number.isFinite(c)).toBe(true);
+    expect(form.terms.find((t) => t.sigma === -a)?.omega).toBe(w);
+    const y = stepResponse(model);
+    for (const t of [0, 0.005, 0.01, 0.03, 0.1]) assertClose(y.value(t), 1 - Math.exp(-a * t) - a * t * Math.exp(-a * t), 1e-9, 1e-9);
+  });
+
   it('numerically repeated poles from root finding are clustered (tolerance 1e-5 relative)', () => {
     const close = parseDesign({ poles: [re(-1), re(-1 - 1e-8), re(-4)], gain: 4 });
     const form = partialFractions(close);

@@ -118,6 +118,9 @@ function clusterPoles(poles: Complex[]): Group[] {
   // groups in the order their first pole appears
   const out: Group[] = [];
   const slot = new Int32Array(n).fill(-1);
+  // whether a group has a member above the real axis, and one on or below it
+  const above = new Uint8Array(n);
+  const below = new Uint8Array(n);
   for (let i = 0; i < n; i++) {
     const a = poles[i] as Complex;
     const root = find(i);
@@ -130,12 +133,18 @@ function clusterPoles(poles: Complex[]): Group[] {
     group.re += a.re;
     group.im += a.im;
     group.m++;
+    if (a.im > 0) above[g] = 1;
+    else below[g] = 1;
   }
-  for (const g of out) {
-    g.re /= g.m;
-    g.im /= g.m;
-    // a cluster that swallowed a conjugate pair sits on the real axis
-    if (Math.abs(g.im) <= POLE_CLUSTER_TOLERANCE * magnitude(g.re, g.im)) g.im = 0;
+  for (let g = 0; g < out.length; g++) {
+    const group = out[g] as Group;
+    group.re /= group.m;
+    group.im /= group.m;
+    // A cluster that swallowed a conjugate pair (members on both sides of,
+    // or on, the real axis) sits on the real axis. A pair that was not
+    // clustered keeps its imaginary part however small: snapping it would
+    // leave two equal real poles, each counted once, and no residue.
+    if (above[g] && below[g]) group.im = 0;
   }
   return out;
 }
