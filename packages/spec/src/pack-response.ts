@@ -48,21 +48,31 @@ export function packResponse(form: ModalForm, scale: number): PackedResponse {
   const count = form.terms.length;
   let size = 0;
   for (const t of form.terms) size += t.multiplicity;
-  const p: PackedResponse = {
-    count,
-    sigma: new Float64Array(count),
-    omega: new Float64Array(count),
-    speed: new Float64Array(count),
-    degree: new Int32Array(count),
-    offset: new Int32Array(count),
-    cos: Array.from({ length: PACKED_LEVELS }, () => new Float64Array(size)),
-    sin: Array.from({ length: PACKED_LEVELS }, () => new Float64Array(size)),
-    bound: new Float64Array(size),
-    transient: new Uint8Array(count),
-    flat: new Float64Array(2 * PACKED_LEVELS * size),
-    maxSpeed: 0,
-    chainLimit: 0,
+  // All the arrays are views on one buffer: one backing store to allocate
+  // (and for the collector to track) instead of seventeen.
+  const floats = 3 * count + (2 * PACKED_LEVELS + 1) * size + 2 * PACKED_LEVELS * size;
+  const buffer = new ArrayBuffer(8 * floats + 4 * 2 * count + count);
+  let at = 0;
+  const f64 = (n: number): Float64Array => {
+    const v = new Float64Array(buffer, at, n);
+    at += 8 * n;
+    return v;
   };
+  const sigma = f64(count);
+  const omega = f64(count);
+  const speed = f64(count);
+  const cos: Float64Array[] = [];
+  const sin: Float64Array[] = [];
+  for (let level = 0; level < PACKED_LEVELS; level++) {
+    cos.push(f64(size));
+    sin.push(f64(size));
+  }
+  const bound = f64(size);
+  const flat = f64(2 * PACKED_LEVELS * size);
+  const degree = new Int32Array(buffer, at, count);
+  const offset = new Int32Array(buffer, at + 4 * count, count);
+  const transient = new Uint8Array(buffer, at + 8 * count, count);
+  const p: PackedResponse = { count, sigma, omega, speed, degree, offset, cos, sin, bound, transient, flat, maxSpeed: 0, chainLimit: 0 };
   let repeated = false;
   let off = 0;
   form.terms.forEach((t, k) => {
