@@ -138,9 +138,10 @@ describe('polecourt batch', () => {
     expect(r.status).toBe(0);
   });
 
-  it('keeps order and line numbers across the blocks that worker threads assess (a bad line deep in the file)', () => {
+  it('keeps order and line numbers across the blocks that worker threads assess (a bad line deep in the input)', () => {
+    // from standard input, whose length is not known ahead, so workers are used (a file this short stays on the main thread)
     const lines = Array.from({ length: 4500 }, (_, i) => (i === 2716 ? '{"poles": [' : JSON.stringify({ ...nise, id: `n${i}` })));
-    const r = run(['batch', '--designs', file('blocks.jsonl', lines.join('\n') + '\n')]);
+    const r = run(['batch', '--designs', '-'], lines.join('\n') + '\n');
     const out = r.stdout.trimEnd().split('\n').map((l) => JSON.parse(l));
     expect(out.length).toBe(4500);
     expect(out[2716].error.line).toBe(2717);

@@ -3,7 +3,7 @@
 // stderr. Usage text goes to stdout only when asked for with --help (that is
 // the output the caller wanted); a usage mistake prints an error object on
 // stdout, the message on stderr, and exits 2.
-import { openSync, readFileSync, createReadStream } from 'node:fs';
+import { createReadStream, fstatSync, openSync, readFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { StringDecoder } from 'node:string_decoder';
 import { Worker } from 'node:worker_threads';
@@ -130,6 +130,8 @@ function write(text: string): Promise<void> {
 // memory stays bounded.
 const BLOCK_LINES = 250;
 const BLOCKS_PER_WORKER = 2;
+/** Files shorter than this are assessed on the main thread alone (standard input, of unknown length, may use workers). */
+const WORKERS_FROM_BYTES = 3 << 20;
 
 interface Held {
   result: BlockResult | null;
@@ -210,6 +212,7 @@ const yieldToEvents = (): Promise<void> => new Promise((resolve) => setImmediate
 
 async function runBatch(file: string, req: ResolvedRequirements | null): Promise<number> {
   let stream: NodeJS.ReadableStream;
+  let useWorkers = true;
   if (file === '-') stream = process.stdin;
   else {
     let fd: number;
@@ -219,9 +222,14 @@ async function runBatch(file: string, req: ResolvedRequirements | null): Promise
       throw new UsageError('file_unreadable', `Cannot read the designs file ${file}: ${(e as Error).message}`);
     }
     stream = createReadStream('', { fd, highWaterMark: 1 << 20 });
+    // A worker pays for itself only on a long file: it takes 100 to 200 ms to
+    // start and then warms up its own compiled code. Here 2,000 to 6,000
+    // sixth-order designs ran 0.03 to 0.1 s faster on this thread alone, and
+    // 10,000 (3.5 MB) 0.03 s faster with a worker.
+    if (fstatSync(fd).size < WORKERS_FROM_BYTES) useWorkers = false;
   }
   const decoder = new StringDecoder('utf8');
-  const threads = Math.max(1, Math.min(availableParallelism(), 8));
+  const threads = useWorkers ? Math.max(1, Math.min(availableParallelism(), 8)) : 1;
   const maxHeld = 8 * threads;
   let pool: BlockPool | null = null;
   let allGood = true;
