@@ -117,6 +117,8 @@ describe('computeStepMetrics properties', () => {
     const r = computeStepMetrics(parseDesign(design), 2);
     expect(r.metrics).toBeNull();
     expect(r.notes.join(' ')).toMatch(/too ill-conditioned for exact metrics/);
+    // and it names the nearly repeated poles, with digits enough to tell them apart
+    expect(r.notes.join(' ')).toContain('the poles at -10.33944 and -10.33954 are only 1.0e-5 of their size apart');
   });
 
   it('every stable model with a non-zero final value gets finite metrics', () => {

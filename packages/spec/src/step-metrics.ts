@@ -31,7 +31,8 @@ import { packResponse, type PackedResponse } from './pack-response.js';
 import { evalPhases } from './eval-response.js';
 import { advancePhases, multiplyPhases, newTermPhases, phasesAt, type TermPhases } from './term-phases.js';
 import { transientBound, transientHorizon } from './transient-horizon.js';
-import { formatNumber } from './format-complex.js';
+import { closestPoles } from './closest-poles.js';
+import { formatNumber, formatRoot } from './format-complex.js';
 
 /** Overshoot or undershoot below 1e-9 of y_f is round-off, reported as none. */
 const FLOOR = 1e-9;
@@ -79,7 +80,7 @@ export function computeStepMetrics(model: Model, settlingBandPct: number): { met
     return {
       metrics: null,
       notes: [
-        `the modal form of this model is too ill-conditioned for exact metrics (its terms reach ${formatNumber(spread)} times the final value and cancel); check the pole and zero placement or reduce the model`,
+        `the modal form of this model is too ill-conditioned for exact metrics (its terms reach ${formatNumber(spread)} times the final value and cancel); check the pole and zero placement or reduce the model${nearlyRepeated(model)}`,
       ],
     };
   }
@@ -360,4 +361,20 @@ function mayDip(d0: number, d1: number, s0: number, s1: number, h: number): bool
     if (sign * v < margin) return true;
   }
   return false;
+}
+
+/** Poles closer than this (relative) are named in the ill-conditioning note. */
+const NEARLY_REPEATED = 1e-3;
+
+// Nearly repeated poles are the usual cause of cancelling terms; poles closer
+// than 1e-5 are clustered into one repeated pole, so entering them as equal
+// gives exact metrics.
+function nearlyRepeated(model: Model): string {
+  const c = closestPoles(model.poles);
+  if (!c || !(c.relative < NEARLY_REPEATED)) return '';
+  const digits = Math.min(15, Math.ceil(-Math.log10(c.relative)) + 2);
+  if (c.a.re === c.b.re && c.a.im === -c.b.im) {
+    return `; the pair at ${formatRoot(c.a, digits)} is only ${c.relative.toExponential(1)} of its size away from the real axis: if it stands for a repeated real pole, enter it as one`;
+  }
+  return `; the poles at ${formatRoot(c.a, digits)} and ${formatRoot(c.b, digits)} are only ${c.relative.toExponential(1)} of their size apart: if they stand for one repeated pole, enter them as equal`;
 }
