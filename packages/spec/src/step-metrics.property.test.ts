@@ -119,6 +119,9 @@ describe('computeStepMetrics properties', () => {
     expect(r.notes.join(' ')).toMatch(/too ill-conditioned for exact metrics/);
     // and it names the nearly repeated poles, with digits enough to tell them apart
     expect(r.notes.join(' ')).toContain('the poles at -10.33944 and -10.33954 are only 1.0e-5 of their size apart');
+    // as the note advises, the two entered as one repeated pole give metrics
+    const repeated = { ...design, poles: design.poles.map((p, i) => (i === 3 ? { ...(design.poles[2] as Complex) } : p)) };
+    expect(computeStepMetrics(parseDesign(repeated), 2).metrics).not.toBeNull();
   });
 
   it('every stable model with a non-zero final value gets finite metrics', () => {
