@@ -374,7 +374,7 @@ function nearlyRepeated(model: Model): string {
   if (!c || !(c.relative < NEARLY_REPEATED)) return '';
   const digits = Math.min(15, Math.ceil(-Math.log10(c.relative)) + 2);
   if (c.a.re === c.b.re && c.a.im === -c.b.im) {
-    return `; the pair at ${formatRoot(c.a, digits)} is only ${c.relative.toExponential(1)} of its size away from the real axis: if it stands for a repeated real pole, enter it as one`;
+    return `; the two poles of the pair at ${formatRoot(c.a, digits)} are only ${c.relative.toExponential(1)} of their size apart (it nearly sits on the real axis): if it stands for a repeated real pole, enter it as one`;
   }
   return `; the poles at ${formatRoot(c.a, digits)} and ${formatRoot(c.b, digits)} are only ${c.relative.toExponential(1)} of their size apart: if they stand for one repeated pole, enter them as equal`;
 }
