@@ -1,4 +1,4 @@
-import { spawnSync } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -148,6 +148,21 @@ describe('polecourt batch', () => {
     expect(out[2715].id).toBe('n2715');
     expect(out[4499].id).toBe('n4499');
     expect(r.status).toBe(1);
+  });
+
+  it('stops quietly with exit 1 when the reader closes the output early (as | head does)', async () => {
+    const lines = Array.from({ length: 4500 }, (_, i) => JSON.stringify({ ...nise, id: `n${i}` }));
+    const child = spawn(process.execPath, [cli, 'batch', '--designs', '-'], { cwd: dir, stdio: ['pipe', 'pipe', 'pipe'] });
+    let stderr = '';
+    child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
+    // the first output closes the reading end; stdin errors once the child has gone
+    child.stdin.on('error', () => {});
+    child.stdout.once('data', () => child.stdout.destroy());
+    child.stdin.end(lines.join('\n') + '\n');
+    const [code, signal] = await new Promise<[number | null, string | null]>((done) => child.on('close', (c, s) => done([c, s])));
+    expect(signal).toBeNull();
+    expect(code).toBe(1);
+    expect(stderr).toBe('');
   });
 });
 

@@ -32,7 +32,9 @@ output only when asked for with --help.
 Exit status:
   0  evaluate: compliant, or no requirements given; batch: every line
      compliant (or no requirements and no bad line); region: bounds printed
-  1  evaluate: noncompliant; batch: at least one line noncompliant or bad
+  1  evaluate: noncompliant; batch: at least one line noncompliant or bad;
+     any command: standard output was closed before all was written (as by
+     | head): the command stops there, with no message
   2  bad input or usage: {"error": {"code", "message", "path"}} on stdout
   3  an internal error of the engine (please report it)
 `;
@@ -332,6 +334,15 @@ async function main(argv: string[]): Promise<number> {
     return err.code === 'internal_error' ? 3 : 2;
   }
 }
+
+// A reader that stops early (\`polecourt batch ... | head\`) closes the pipe:
+// stop at once and quietly rather than die on the unhandled EPIPE, and not
+// with 0, since not every line reached the reader.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => {
+  if (e.code === 'EPIPE') process.exit(1);
+  process.stderr.write(`polecourt: cannot write the output: ${e.message}\n`);
+  process.exit(3);
+});
 
 main(process.argv.slice(2)).then(
   (code) => {
