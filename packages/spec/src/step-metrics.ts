@@ -92,7 +92,9 @@ export function computeStepMetrics(model: Model, settlingBandPct: number): { met
       notes: ['the response is too lightly damped for an exact scan (more than 2 million oscillation steps before it settles)'],
     };
   }
-  const s = new Scan(p, band);
+  // sign of the first derivative of r that is not zero at 0+: the one of
+  // order n - m, equal to gain / y_f (denominator monic)
+  const s = new Scan(p, band, model.poles.length - model.zeros.length, Math.sign(model.gain / yf));
   s.run(tSettle);
   // a later peak could still beat the largest overshoot found: scan on
   const target = Math.max(s.rMax - 1, FLOOR);
@@ -173,7 +175,7 @@ class Scan {
   next: TermPhases = scanNext;
   stepLength = Number.NaN;
 
-  constructor(p: PackedResponse, band: number) {
+  constructor(p: PackedResponse, band: number, relativeDegree: number, leadSign: number) {
     this.p = p;
     this.band = band;
     phasesAt(p, 0, this.now);
@@ -187,13 +189,19 @@ class Scan {
     if (this.r >= 0.1) this.t10 = 0;
     if (this.r >= 0.9) this.t90 = 0;
     // r'(0+) is often exactly zero in theory (relative degree >= 2) and
-    // round-off in practice: then the first non-negligible derivative decides.
+    // round-off in practice: then the first derivative that is not zero
+    // decides, which for relative degree >= 2 is the leading one (r'' and
+    // r''' are round-off too from degree 4 on; a wrong direction here made
+    // a spurious extremum at 0+ that refine then chased to 0).
     const noise = 1e-10 * levelScale(p);
     this.dir = Math.sign(this.d);
     if (Math.abs(this.d) <= noise) {
-      this.dir = Math.sign(this.dd) || Math.sign(buf[3] as number) || 1;
+      this.dir = relativeDegree >= 2 ? leadSign : Math.sign(this.dd) || Math.sign(buf[3] as number) || 1;
       this.d = this.dir * Number.MIN_VALUE; // keeps brackets consistent with dir
     }
+    // r''(0+) is zero in theory from relative degree 3 on: its round-off
+    // sign would send the first step looking for a dip of r' that is not there
+    if (relativeDegree >= 3) this.dd = leadSign * Number.MIN_VALUE;
   }
 
   run(tEnd: number): void {
@@ -304,7 +312,8 @@ function valueAt(p: PackedResponse, t: number): number {
 // as the slope (Press et al., Numerical Recipes, rtsafe): a Newton step that
 // would leave the bracket or not halve the error is replaced by bisection.
 // Starts from the secant point; stops when the Newton step falls below
-// 1e-12 of t, after which quadratic convergence leaves an error far below it.
+// 1e-12 of t, after which quadratic convergence leaves an error far below it
+// (of the bracket's far end, so a root at t = 0 ends the search too).
 export function refine(p: PackedResponse, level: number, target: number, a: number, b: number, fa: number, fb: number): number {
   if (fa === 0) return a;
   if (fb === 0) return b;
@@ -314,6 +323,7 @@ export function refine(p: PackedResponse, level: number, target: number, a: numb
   if (!(x > Math.min(a, b) && x < Math.max(a, b))) x = 0.5 * (a + b);
   let dxOld = Math.abs(b - a);
   let dx = dxOld;
+  const scale = Math.max(Math.abs(a), Math.abs(b));
   // the first point directly; later ones from the last (term-phases.ts)
   phasesAt(p, x, probe);
   evalPhases(p, probe, level + 2, buf);
@@ -327,12 +337,12 @@ export function refine(p: PackedResponse, level: number, target: number, a: numb
       dxOld = dx;
       dx = 0.5 * (hi - lo);
       x = lo + dx;
-      if (Math.abs(dx) <= 2e-16 * Math.abs(x)) return x;
+      if (Math.abs(dx) <= 2e-16 * scale) return x;
     } else {
       dxOld = dx;
       dx = f / df;
       x -= dx;
-      if (Math.abs(dx) <= 1e-12 * Math.abs(x)) return x;
+      if (Math.abs(dx) <= 1e-12 * scale) return x;
     }
     probeAt(p, x, level + 2);
     f = (buf[level] as number) - target;
