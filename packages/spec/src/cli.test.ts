@@ -6,7 +6,7 @@ import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { assertClose } from '../test/asserts.js';
 
-// The command-line tool, run as the built dist/cli.js in a child process.
+// The command-line tool, run as the built and bundled dist/cli.js in a child process.
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 const cli = join(root, 'dist', 'cli.js');
 let dir = '';
@@ -30,6 +30,9 @@ beforeAll(() => {
   const tsc = join(root, 'node_modules', 'typescript', 'bin', 'tsc');
   const build = spawnSync(process.execPath, [tsc, '-p', join(root, 'tsconfig.build.json')], { encoding: 'utf8' });
   if (build.status !== 0) throw new Error(`build failed:\n${build.stdout}${build.stderr}`);
+  // then the bundles users run (tsc alone would leave the per-module cli.js in their place)
+  const bundle = spawnSync(process.execPath, [join(root, 'scripts', 'bundle-cli.mjs')], { encoding: 'utf8' });
+  if (bundle.status !== 0) throw new Error(`bundling failed:\n${bundle.stdout}${bundle.stderr}`);
   dir = mkdtempSync(join(tmpdir(), 'polecourt-cli-'));
 }, 120_000);
 
