@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { partialFractions } from './partial-fractions.js';
+import { clusteredPartialFractions, partialFractions, type ModalForm } from './partial-fractions.js';
+import { packResponse } from './pack-response.js';
+import { evalResponse } from './eval-response.js';
 import { stepResponse } from './step-response.js';
 import { parseDesign } from './parse-design.js';
 import { assertClose } from '../test/asserts.js';
@@ -76,5 +78,42 @@ describe('partialFractions', () => {
       assertClose(y.value(t), 1 - Math.exp(-t) * (Math.cos(2 * t) + 0.5 * Math.sin(2 * t)), 1e-13);
       assertClose(y.derivative(t), 2.5 * Math.exp(-t) * Math.sin(2 * t), 1e-12, 1e-3);
     }
+  });
+
+  // A cluster's terms summed by expansion about its mean (partial-fractions.ts header).
+  const valueOf = (form: ModalForm, t: number): number => {
+    const out = new Float64Array(1);
+    evalResponse(packResponse(form, 1), t, 1, out);
+    return out[0] as number;
+  };
+
+  it('a cluster 1e-2 apart, summed by expansion, matches 1/(s (s+a)(s+b)) from the transform table', () => {
+    // Nise Table 2.2 / Ogata Appendix A, by partial fractions:
+    // 1/(s (s+a)(s+b)) <-> 1/(ab) + e^{-at}/(a (a-b)) + e^{-bt}/(b (b-a)).
+    // Merged into a double pole without the expansion's terms the response
+    // would be off by about 2e-5 here.
+    const a = 1;
+    const b = 1.01;
+    const form = clusteredPartialFractions(parseDesign({ poles: [re(-a), re(-b)], gain: 1 }), 2e-2) as ModalForm;
+    expect(form).not.toBeNull();
+    expect(form.terms.some((t) => t.sigma === -(a + b) / 2 && t.multiplicity > 2)).toBe(true);
+    for (const t of [0.1, 0.7, 2, 5, 12, 30]) {
+      const table = 1 / (a * b) + Math.exp(-a * t) / (a * (a - b)) + Math.exp(-b * t) / (b * (b - a));
+      assertClose(valueOf(form, t), table, 1e-12, 1);
+    }
+  });
+
+  it('a cluster of two complex pairs 1e-2 apart agrees with their separate (well-conditioned) modal terms', () => {
+    const model = parseDesign({ poles: [...pairOf(-1, 3), ...pairOf(-1.01, 3.02)], zeros: [re(-2)], gain: 5 });
+    const apart = partialFractions(model);
+    expect(apart.terms.filter((t) => t.omega > 0)).toHaveLength(2);
+    const together = clusteredPartialFractions(model, 2e-2) as ModalForm;
+    expect(together.terms.filter((t) => t.omega > 0)).toHaveLength(1);
+    for (const t of [0.05, 0.4, 1.5, 4, 9]) assertClose(valueOf(together, t), valueOf(apart, t), 1e-12, 1);
+  });
+
+  it('a cluster too wide for its circle (offsets over a quarter of the way to the next pole) is refused', () => {
+    // -1, -1.2, -1.4 chain into one cluster at tolerance 0.2, with the step's pole at 0 only 1.2 away
+    expect(clusteredPartialFractions(parseDesign({ poles: [re(-1), re(-1.2), re(-1.4)], gain: 1 }), 0.2)).toBeNull();
   });
 });

@@ -9,16 +9,16 @@ import fc from 'fast-check';
 import { computeStepMetrics } from './step-metrics.js';
 import { parseDesign } from './parse-design.js';
 import type { Complex, StepMetrics } from './types.js';
+import { referenceMetrics } from '../test/ode-reference.js';
 
 const pole = fc.double({ min: 0.2, max: 20, noNaN: true });
 const stableModel = fc
   .record({
     sigma: pole,
     omega: fc.double({ min: 0.1, max: 20, noNaN: true }),
-    // Real poles at least 1e-3 apart (relative): closer ones that are not
-    // clustered as repeated (tolerance 1e-5) can make the modal form too
-    // ill-conditioned for exact metrics, which the engine then refuses (the
-    // test "nearly repeated real poles" below).
+    // Real poles at least 1e-3 apart (relative): closer ones take the
+    // engine's wider clustering (the test "nearly repeated real poles"
+    // below), checked against odex there and in step-metrics.test.ts.
     reals: fc.array(pole, { maxLength: 3 }).filter((rs) => rs.every((a, i) => rs.every((b, j) => i === j || Math.abs(a - b) > 1e-3 * Math.max(a, b)))),
     zero: fc.option(fc.double({ min: -30, max: -0.3, noNaN: true }), { nil: undefined }),
   })
@@ -97,12 +97,14 @@ describe('computeStepMetrics properties', () => {
     );
  }, 60_000);
 
-  it('nearly repeated real poles, too close for an exact modal sum but not clustered, get no metrics and say why', () => {
+  it('nearly repeated real poles, too close for a plain modal sum, are summed as a cluster and match odex', () => {
     // Found by the property below before its poles were kept apart: -10.33944
-    // and -10.33954 are 1.00003e-5 apart (relative), just outside the cluster
-    // tolerance, so each keeps a residue of about 4.5e7 times the final value;
-    // their round-off (eps times that, 1e-8) would be the size of the answer's
-    // last digits, so the engine refuses rather than print noise.
+    // and -10.33954 are 1.00003e-5 apart (relative), just outside the default
+    // cluster tolerance, so kept apart each has a residue of about 4.5e7
+    // times the final value (round-off 1e-8). The engine then clusters them
+    // more widely and sums the cluster by expansion about its mean
+    // (partial-fractions.ts); the reference is odex on the polynomial
+    // state-space realisation, which has no such cancellation.
     const design = {
       poles: [
         { re: -2.6757083536757245, im: 0.1 },
@@ -114,14 +116,29 @@ describe('computeStepMetrics properties', () => {
       zeros: [{ re: -0.3, im: 0 }],
       gain: 1,
     };
-    const r = computeStepMetrics(parseDesign(design), 2);
+    const model = parseDesign(design);
+    const r = computeStepMetrics(model, 2);
+    expect(r.notes.join(' ')).not.toMatch(/ill-conditioned/);
+    const m = r.metrics as StepMetrics;
+    expect(m).not.toBeNull();
+    const ref = referenceMetrics(model.numerator, model.denominator, m.finalValue, 2, 1.3 * m.settlingTime + 1, 40000);
+    expect(close(m.overshootPct, ref.overshootPct, 1e-5, 1e-3)).toBe(true);
+    expect(close(m.settlingTime, ref.settlingTime, 1e-4)).toBe(true);
+    expect(close(m.riseTime, ref.riseTime, 1e-4)).toBe(true);
+  });
+
+  it('a chain of thirteen real poles about 1e-2 apart stays too ill-conditioned even clustered: no metrics, and the note says why', () => {
+    // -1, -1.01, ..., -1.11 and -1.0005: kept apart the terms reach 2e19
+    // times the final value; clustered at 1e-2 the chain is one cluster too
+    // wide for its expansion. The engine refuses rather than print noise.
+    const poles: Complex[] = [{ re: -1.0005, im: 0 }, ...Array.from({ length: 12 }, (_, i) => ({ re: -1 - 0.01 * i, im: 0 }))];
+    let gain = 1;
+    for (const p of poles) gain *= -p.re;
+    const r = computeStepMetrics(parseDesign({ poles, gain }), 2);
     expect(r.metrics).toBeNull();
     expect(r.notes.join(' ')).toMatch(/too ill-conditioned for exact metrics/);
     // and it names the nearly repeated poles, with digits enough to tell them apart
-    expect(r.notes.join(' ')).toContain('the poles at -10.33944 and -10.33954 are only 1.0e-5 of their size apart');
-    // as the note advises, the two entered as one repeated pole give metrics
-    const repeated = { ...design, poles: design.poles.map((p, i) => (i === 3 ? { ...(design.poles[2] as Complex) } : p)) };
-    expect(computeStepMetrics(parseDesign(repeated), 2).metrics).not.toBeNull();
+    expect(r.notes.join(' ')).toContain('the poles at -1 and -1.0005 are only 5.0e-4 of their size apart');
   });
 
   it('every stable model with a non-zero final value gets finite metrics', () => {

@@ -26,7 +26,7 @@
 import type { Model, StepMetrics } from './types.js';
 import { stability } from './is-stable.js';
 import { dcGain } from './dc-gain.js';
-import { partialFractions } from './partial-fractions.js';
+import { conditionedModalForm, MAX_ROUNDING } from './conditioned-modal-form.js';
 import { packResponse, type PackedResponse } from './pack-response.js';
 import { evalPhases } from './eval-response.js';
 import { advancePhases, multiplyPhases, newTermPhases, phasesAt, type TermPhases } from './term-phases.js';
@@ -39,8 +39,6 @@ const FLOOR = 1e-9;
 /** A term smaller than this (relative to y_f) no longer sets the step. */
 const SIGNIFICANT = 1e-10;
 const STEP_FACTOR = 1;
-/** Largest acceptable round-off of the modal sum, relative to y_f. */
-const MAX_ROUNDING = 1e-8;
 /** Refuse, with a note, a scan that would take more steps than this. */
 const MAX_STEPS = 2_000_000;
 
@@ -63,7 +61,7 @@ export function computeStepMetrics(model: Model, settlingBandPct: number): { met
     };
   }
   const notes: string[] = [];
-  const p = packResponse(partialFractions(model), 1 / yf);
+  const p = packResponse(conditionedModalForm(model, yf), 1 / yf);
   // The modal sum cancels when residues dwarf the final value (high order,
   // clustered poles): its round-off is about eps * sum |C_k|. Past 1e-8 of
   // y_f the metrics would be noise, so say so instead of printing them.

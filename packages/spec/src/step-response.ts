@@ -2,7 +2,8 @@
 // dy/dt in closed form (sums of t^n e^{sigma t} cos/sin terms), the final
 // value G(0) and the initial value y(0+) = D. y(t) = 0 for t < 0.
 import type { Model } from './types.js';
-import { partialFractions, type ModalForm } from './partial-fractions.js';
+import { conditionedModalForm } from './conditioned-modal-form.js';
+import type { ModalForm } from './partial-fractions.js';
 import { packResponse, type PackedResponse } from './pack-response.js';
 import { evalResponse } from './eval-response.js';
 import { dcGain } from './dc-gain.js';
@@ -20,7 +21,8 @@ export interface StepResponse {
 }
 
 export function stepResponse(model: Model): StepResponse {
-  const modal = partialFractions(model);
+  const finalValue = dcGain(model);
+  const modal = conditionedModalForm(model, finalValue);
   const packed = packResponse(modal, 1);
   const out = new Float64Array(2);
   return {
@@ -34,7 +36,7 @@ export function stepResponse(model: Model): StepResponse {
       evalResponse(packed, t, 2, out);
       return out[1] as number;
     },
-    finalValue: dcGain(model),
+    finalValue,
     initialValue: modal.feedthrough,
     modal,
     packed,
