@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { computeStepMetrics } from './step-metrics.js';
 import { parseDesign } from './parse-design.js';
-import type { StepMetrics } from './types.js';
+import type { Model, StepMetrics } from './types.js';
 import { assertClose } from '../test/asserts.js';
 import { referenceMetrics } from '../test/ode-reference.js';
 import { systems } from '../test/reference-systems.js';
@@ -96,17 +96,23 @@ describe('computeStepMetrics against published second-order relations', () => {
   });
 });
 
+// The metrics against odex on the model's polynomial realisation, sampled
+// densely past the settling time and refined (test/ode-reference.ts).
+function expectMatchesOdex(model: Model, m: StepMetrics): void {
+  const ref = referenceMetrics(model.numerator, model.denominator, m.finalValue, 2, 1.3 * m.settlingTime + 1, 40000);
+  assertClose(m.overshootPct, ref.overshootPct, 1e-5, 1e-3);
+  assertClose(m.undershootPct, ref.undershootPct, 1e-5, 1e-3);
+  if (ref.peakTime === null) expect(m.peakTime).toBeNull();
+  else assertClose(m.peakTime, ref.peakTime, 1e-3, 1e-3);
+  assertClose(m.settlingTime, ref.settlingTime, 1e-4);
+  assertClose(m.riseTime, ref.riseTime, 1e-4);
+}
+
 describe('computeStepMetrics against odex (ODEX extrapolation integrator on the state-space realisation)', () => {
   it.each(systems)('%s: metrics agree with dense reference sampling plus refinement', (_name, design) => {
     const model = parseDesign(design);
     const m = metricsOf(design);
-    const ref = referenceMetrics(model.numerator, model.denominator, m.finalValue, 2, 1.3 * m.settlingTime + 1, 40000);
-    assertClose(m.overshootPct, ref.overshootPct, 1e-5, 1e-3);
-    assertClose(m.undershootPct, ref.undershootPct, 1e-5, 1e-3);
-    if (ref.peakTime === null) expect(m.peakTime).toBeNull();
-    else assertClose(m.peakTime, ref.peakTime, 1e-3, 1e-3);
-    assertClose(m.settlingTime, ref.settlingTime, 1e-4);
-    assertClose(m.riseTime, ref.riseTime, 1e-4);
+    expectMatchesOdex(model, m);
   });
 });
 
@@ -131,13 +137,7 @@ describe('nearly repeated poles against odex', () => {
     const { metrics, notes } = computeStepMetrics(model, 2);
     expect(notes.join(' ')).not.toMatch(/ill-conditioned/);
     const m = metrics as StepMetrics;
-    const ref = referenceMetrics(model.numerator, model.denominator, m.finalValue, 2, 1.3 * m.settlingTime + 1, 40000);
-    assertClose(m.overshootPct, ref.overshootPct, 1e-5, 1e-3);
-    assertClose(m.undershootPct, ref.undershootPct, 1e-5, 1e-3);
-    if (ref.peakTime === null) expect(m.peakTime).toBeNull();
-    else assertClose(m.peakTime, ref.peakTime, 1e-3, 1e-3);
-    assertClose(m.settlingTime, ref.settlingTime, 1e-4);
-    assertClose(m.riseTime, ref.riseTime, 1e-4);
+    expectMatchesOdex(model, m);
   });
 });
 
