@@ -51,6 +51,24 @@ describe('polyRoots on polynomials built from known roots', () => {
     assertClose(twos[0]?.re, -2, 1e-12);
   });
 
+  it.each([7, 8, 12, 16, 20, 24])(
+    '(s+1)^%i from its binomial coefficients is one root of that multiplicity at -1, not a ring of radius eps^(1/m)',
+    (n) => {
+      // binomial theorem: (s+1)^n = sum C(n,k) s^(n-k); every C(n,k) is exact in double for n <= 24
+      const c = [1];
+      for (let i = 0; i < n; i++) {
+        c.push(0);
+        for (let k = c.length - 1; k > 0; k--) c[k] = (c[k] as number) + (c[k - 1] as number);
+      }
+      const found = polyRoots(c);
+      expect(found).toHaveLength(n);
+      for (const z of found) {
+        expect(z.im).toBe(0);
+        assertClose(z.re, -1, 1e-12);
+      }
+    },
+  );
+
   it('roots at the origin are split off exactly', () => {
     expect(polyRoots([1, 3, 2, 0, 0])).toEqual([r(0), r(0), r(-1), r(-2)]);
   });

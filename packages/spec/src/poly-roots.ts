@@ -283,8 +283,14 @@ function symmetrize(c: number[], zr: Float64Array, zi: Float64Array, ev: Evaluat
   lowers.forEach((l, j) => {
     if (!lowerUsed[j]) reals.push({ ...l, im: 0 });
   });
-  // 3. Cluster overlapping inclusion disks, 4. polish.
+  // 3. A real root of high multiplicity comes out as a ring of reals and
+  //    pairs around it: find those rings first, as one cluster each.
   const out: Complex[] = [];
+  const ringsOut = realRings(c, reals, pairs, ev);
+  for (const z of ringsOut.roots) out.push(z);
+  reals.splice(0, reals.length, ...ringsOut.reals);
+  pairs.splice(0, pairs.length, ...ringsOut.pairs);
+  // 4. Cluster overlapping inclusion disks, 5. polish.
   for (const cl of clusterByDisks(reals)) {
     for (const z of resolveCluster(c, cl, ev)) out.push({ re: z.re, im: 0 });
   }
@@ -297,6 +303,80 @@ function symmetrize(c: number[], zr: Float64Array, zi: Float64Array, ev: Evaluat
   return out;
 }
 
+// Rings: real roots and upper members of pairs whose inclusion disks overlap,
+// within RING_CAP of their size, a pair among them and two members at least. Such a
+// ring of total multiplicity m is one m-fold real root when the refined
+// centre passes resolveCluster's test; otherwise its members go on to the
+// separate real and pair clustering below. (Clustering reals and pairs
+// apart split a 7-fold root into sub-clusters whose refined centres drifted,
+// so the root set no longer summed to -a_1.) RING_CAP is wider than
+// CLUSTER_CAP because the multiple-root test, not the distance, decides:
+// eps^(1/m) reaches 0.2 at m = 22.
+const RING_CAP = 0.2;
+
+function realRings(c: number[], reals: Cluster[], pairs: Cluster[], ev: Evaluation): { roots: Complex[]; reals: Cluster[]; pairs: Cluster[] } {
+  const items = [...reals, ...pairs];
+  const k = items.length;
+  const parent = new Int32Array(k);
+  for (let i = 0; i < k; i++) parent[i] = i;
+  const find = (i: number): number => {
+    while (parent[i] !== i) i = parent[i] as number;
+    return i;
+  };
+  for (let i = 0; i < k; i++) {
+    const a = items[i] as Cluster;
+    for (let j = i + 1; j < k; j++) {
+      const b = items[j] as Cluster;
+      const d = Math.hypot(a.re - b.re, a.im - b.im);
+      if (d <= a.radius + b.radius && d <= RING_CAP * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im))) {
+        parent[find(i)] = find(j);
+      }
+    }
+  }
+  const groups = new Map<number, number[]>();
+  for (let i = 0; i < k; i++) {
+    const root = find(i);
+    const g = groups.get(root);
+    if (g) g.push(i);
+    else groups.set(root, [i]);
+  }
+  const roots: Complex[] = [];
+  const taken = new Uint8Array(k);
+  for (const members of groups.values()) {
+    // reals alone, or pairs alone: the usual clustering (a lone pair taken
+    // for a double real root would leave the model)
+    const pairCount = members.filter((i) => i >= reals.length).length;
+    if (pairCount === 0 || (pairCount === 1 && members.length === 1)) continue;
+    let m = 0;
+    let sum = 0;
+    for (const i of members) {
+      const w = i >= reals.length ? 2 : 1;
+      m += w;
+      sum += w * (items[i] as Cluster).re;
+    }
+    const centre = multipleRoot(c, m, sum / m, 0, ev);
+    if (centre === null) continue;
+    for (let j = 0; j < m; j++) roots.push({ re: centre.re, im: 0 });
+    for (const i of members) taken[i] = 1;
+  }
+  return {
+    roots,
+    reals: reals.filter((_, i) => !taken[i]),
+    pairs: pairs.filter((_, i) => !taken[reals.length + i]),
+  };
+}
+
+// The refined centre of an m-fold root near (re, im), or null when p, ...,
+// p^(m-2) do not all vanish there to rounding level (see resolveCluster).
+function multipleRoot(c: number[], m: number, re: number, im: number, ev: Evaluation): Complex | null {
+  const z = polish(derivative(c, m - 1), re, im, ev);
+  for (let j = 0; j < m - 1; j++) {
+    evaluate(derivative(c, j), z.re, z.im, ev);
+    if (!(ev.backward <= MULTIPLE_ROOT_CHECK)) return null;
+  }
+  return z;
+}
+
 // A cluster of m overlapping disks is taken as one m-fold root only when the
 // refined centre (Newton on p^(m-1)) also makes p, ..., p^(m-2) vanish to
 // rounding level. Otherwise the points are distinct but ill-conditioned
@@ -305,14 +385,8 @@ const MULTIPLE_ROOT_CHECK = 1e3;
 
 function resolveCluster(c: number[], cl: Cluster, ev: Evaluation): Complex[] {
   if (cl.members.length === 1) return [polish(c, cl.re, cl.im, ev)];
-  const m = cl.members.length;
-  const z = polish(derivative(c, m - 1), cl.re, cl.im, ev);
-  let genuine = true;
-  for (let j = 0; j < m - 1 && genuine; j++) {
-    evaluate(derivative(c, j), z.re, z.im, ev);
-    genuine = ev.backward <= MULTIPLE_ROOT_CHECK;
-  }
-  if (genuine) return cl.members.map(() => ({ re: z.re, im: z.im }));
+  const z = multipleRoot(c, cl.members.length, cl.re, cl.im, ev);
+  if (z !== null) return cl.members.map(() => ({ re: z.re, im: z.im }));
   return cl.members.map((w) => polish(c, w.re, w.im, ev));
 }
 
