@@ -11,7 +11,7 @@ import type { Model } from './types.js';
 export const MAX_ROUNDING = 1e-8;
 const EPS = 2.220446049250313e-16;
 /** Wider cluster tolerances tried in turn, relative to the poles' size. */
-const RETRY_TOLERANCES = [1e-4, 1e-3, 1e-2];
+const RETRY_TOLERANCES = [1e-4, 1e-3, 1e-2, 3e-2, 1e-1];
 
 /** sum |C_kn| of the transient terms over |y_f|: eps times it is the sum's round-off. */
 export function modalSpread(form: ModalForm, yf: number): number {

@@ -59,7 +59,7 @@ interface Group {
 /** Truncation error allowed for a cluster's expansion, relative to the final value. */
 const EXPANSION_ERROR = 1e-14;
 /** The most expansion terms a cluster may take. */
-const MAX_EXPANSION = 24;
+const MAX_EXPANSION = 40;
 /** Largest ratio of a cluster's offsets to its circle's radius. */
 const MAX_SPREAD_RATIO = 0.25;
 

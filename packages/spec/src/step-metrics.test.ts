@@ -141,6 +141,60 @@ describe('nearly repeated poles against odex', () => {
   });
 });
 
+// n identical first-order lags, 1/(s+1)^n: y(t) = 1 - e^{-t} sum_{k<n} t^k / k!,
+// the regularized incomplete gamma function P(n, t) (Abramowitz & Stegun,
+// Handbook of Mathematical Functions, 6.5.13, from memory; it also follows
+// from the transform pair t^k e^{-t} / k! <-> 1/(s+1)^{k+1}, Ogata Appendix A).
+// Reference times by bisection on that closed form, here in the test.
+describe('n identical lags against the incomplete gamma function', () => {
+  const closedForm = (n: number, t: number): number => {
+    let term = 1;
+    let sum = 1;
+    for (let k = 1; k < n; k++) {
+      term *= t / k;
+      sum += term;
+    }
+    return 1 - Math.exp(-t) * sum;
+  };
+  const crossing = (n: number, level: number): number => {
+    let lo = 0;
+    let hi = 10 * n + 50;
+    for (let i = 0; i < 200; i++) {
+      const mid = 0.5 * (lo + hi);
+      if (closedForm(n, mid) < level) lo = mid;
+      else hi = mid;
+    }
+    return 0.5 * (lo + hi);
+  };
+  const binomial = (n: number): number[] => {
+    const c = [1];
+    for (let i = 0; i < n; i++) {
+      c.push(0);
+      for (let k = c.length - 1; k > 0; k--) c[k] = (c[k] as number) + (c[k - 1] as number);
+    }
+    return c;
+  };
+  it.each([
+    ['coefficients', 8],
+    ['coefficients', 24],
+    ['poles', 8],
+    ['poles', 40],
+  ] as const)('1/(s+1)^n given as %s, n = %i: settling and rise time exact, no overshoot', (form, n) => {
+    const design = form === 'coefficients' ? { numerator: [1], denominator: binomial(n) } : { poles: Array.from({ length: n }, () => re(-1)), gain: 1 };
+    const m = metricsOf(design);
+    assertClose(m.settlingTime, crossing(n, 0.98), 1e-9);
+    assertClose(m.riseTime, crossing(n, 0.9) - crossing(n, 0.1), 1e-9);
+    expect(m.overshootPct).toBe(0);
+  });
+
+  it('1/(s+1)^30 as coefficients: the roots cannot be found in double precision, so no metrics, and the note says so', () => {
+    // (s+1)^30's computed roots spread over about 0.3 (eps^(1/30)); given as poles it is exact (above)
+    const { metrics, notes } = computeStepMetrics(parseDesign({ numerator: [1], denominator: binomial(30) }), 2);
+    expect(metrics).toBeNull();
+    expect(notes.join(' ')).toMatch(/do not reproduce the model closely enough for exact metrics .*enter the model in zero-pole-gain form/);
+  });
+});
+
 describe('computeStepMetrics pitfalls', () => {
   it('biproper (2s + 1)/(s + 1): y(0+) = 2 counts as 100 % overshoot at t = 0, Ts = ln 50', () => {
     // y = 1 + e^{-t} (Nise ch. 4: first-order response plus the direct term)

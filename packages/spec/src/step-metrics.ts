@@ -32,6 +32,7 @@ import { evalPhases } from './eval-response.js';
 import { advancePhases, multiplyPhases, newTermPhases, phasesAt, type TermPhases } from './term-phases.js';
 import { transientBound, transientHorizon } from './transient-horizon.js';
 import { closestPoles } from './closest-poles.js';
+import { rootConsistency } from './root-consistency.js';
 import { formatNumber, formatRoot } from './format-complex.js';
 
 /** Overshoot or undershoot below 1e-9 of y_f is round-off, reported as none. */
@@ -59,6 +60,17 @@ export function computeStepMetrics(model: Model, settlingBandPct: number): { met
       metrics: null,
       notes: ['the final value is zero (a zero at the origin), so overshoot, settling and rise time relative to it are undefined'],
     };
+  }
+  if (model.form === 'polynomial') {
+    const rc = rootConsistency(model);
+    if (!rc.ok) {
+      return {
+        metrics: null,
+        notes: [
+          `the poles and zeros found for these coefficients do not reproduce the model closely enough for exact metrics (G(jw) from them is off by ${formatNumber(rc.worst, 2)} of its value at w = ${formatNumber(rc.at)} rad/s); a root of high multiplicity or a tight cluster of roots cannot be separated in double precision: enter the model in zero-pole-gain form`,
+        ],
+      };
+    }
   }
   const notes: string[] = [];
   const p = packResponse(conditionedModalForm(model, yf), 1 / yf);
