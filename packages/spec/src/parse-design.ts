@@ -15,6 +15,7 @@ import { SpecInputError } from './spec-input-error.js';
 import { MAX_MODEL_ORDER } from './max-model-order.js';
 import { polyFromRoots } from './poly-from-roots.js';
 import { polyRoots } from './poly-roots.js';
+import { rootConsistency } from './root-consistency.js';
 import { newRootList } from './root-list.js';
 import { sortRoots } from './sort-roots.js';
 import { magnitude } from './magnitude.js';
@@ -131,9 +132,15 @@ function parsePolynomial(input: Record<string, unknown>): Model {
       'denominator[0]',
     );
   }
-  const poles = polyRoots(denominator);
-  const zeros = polyRoots(numerator);
-  return { form: 'polynomial', poles, zeros, gain: numerator[0] as number, numerator, denominator };
+  const model: Model = { form: 'polynomial', poles: polyRoots(denominator), zeros: polyRoots(numerator), gain: numerator[0] as number, numerator, denominator };
+  // Clustering a tight group of roots can leave a set that no longer
+  // reproduces the polynomial (root-consistency.ts); the roots as found,
+  // each polished on its own, may then do better.
+  if (!rootConsistency(model).ok) {
+    const separate: Model = { ...model, poles: polyRoots(denominator, true), zeros: polyRoots(numerator, true) };
+    if (rootConsistency(separate).ok) return separate;
+  }
+  return model;
 }
 
 function parseRootList(value: unknown, path: string): Complex[] {

@@ -27,7 +27,12 @@ const STOP_FACTOR = 2;
 // That still covers an m-fold root up to m = 7 (spread about eps^(1/m)).
 const CLUSTER_CAP = 1e-2;
 
-export function polyRoots(coeffs: readonly number[]): Complex[] {
+/**
+ * separate: keep every root as found and polished, with no clustering and no
+ * move onto the real axis beyond round-off (parse-design falls back to this
+ * when the clustered roots do not reproduce the polynomial).
+ */
+export function polyRoots(coeffs: readonly number[], separate = false): Complex[] {
   let first = 0;
   while (first < coeffs.length && coeffs[first] === 0) first++;
   if (first === coeffs.length) return [];
@@ -40,7 +45,7 @@ export function polyRoots(coeffs: readonly number[]): Complex[] {
   const lead = coeffs[first] as number;
   const c: number[] = [];
   for (let i = first; i <= last; i++) c.push((coeffs[i] as number) / lead);
-  const roots = c.length <= 3 ? lowDegreeRoots(c) : aberthRoots(c);
+  const roots = c.length <= 3 ? lowDegreeRoots(c) : aberthRoots(c, separate);
   for (let i = 0; i < zerosAtOrigin; i++) roots.push({ re: 0, im: 0 });
   return sortRoots(roots);
 }
@@ -149,7 +154,7 @@ function evaluate(c: number[], x: number, y: number, out: Evaluation): void {
   out.radius = (n * mod * (qm + level)) / em;
 }
 
-function aberthRoots(c: number[]): Complex[] {
+function aberthRoots(c: number[], separate: boolean): Complex[] {
   const n = c.length - 1;
   const zr = new Float64Array(n);
   const zi = new Float64Array(n);
@@ -195,7 +200,7 @@ function aberthRoots(c: number[]): Complex[] {
     }
     if (active === 0) break;
   }
-  return symmetrize(c, zr, zi, ev);
+  return symmetrize(c, zr, zi, ev, separate);
 }
 
 // Bini's starting points: the upper convex hull of (k, log|a_k|), a_k the
@@ -237,7 +242,7 @@ interface Cluster {
   members: Complex[];
 }
 
-function symmetrize(c: number[], zr: Float64Array, zi: Float64Array, ev: Evaluation): Complex[] {
+function symmetrize(c: number[], zr: Float64Array, zi: Float64Array, ev: Evaluation, separate: boolean): Complex[] {
   const n = zr.length;
   const radius = new Float64Array(n);
   for (let k = 0; k < n; k++) {
@@ -252,7 +257,8 @@ function symmetrize(c: number[], zr: Float64Array, zi: Float64Array, ev: Evaluat
     const r = radius[k] as number;
     const im = zi[k] as number;
     const item: Cluster = { re: zr[k] as number, im, radius: r, members: [] };
-    if (Math.abs(im) <= Math.min(r, CLUSTER_CAP * Math.hypot(item.re, im))) reals.push({ ...item, im: 0 });
+    const realReach = separate ? 16 * EPS * Math.hypot(item.re, im) : Math.min(r, CLUSTER_CAP * Math.hypot(item.re, im));
+    if (Math.abs(im) <= realReach) reals.push({ ...item, im: 0 });
     else if (im > 0) uppers.push(item);
     else lowers.push(item);
   }
@@ -283,9 +289,18 @@ function symmetrize(c: number[], zr: Float64Array, zi: Float64Array, ev: Evaluat
   lowers.forEach((l, j) => {
     if (!lowerUsed[j]) reals.push({ ...l, im: 0 });
   });
+  const out: Complex[] = [];
+  if (separate) {
+    for (const u of reals) out.push({ ...polish(c, u.re, 0, ev), im: 0 });
+    for (const u of pairs) {
+      const z = polish(c, u.re, u.im, ev);
+      const im = z.im > 0 ? z.im : u.im;
+      out.push({ re: z.re, im }, { re: z.re, im: -im });
+    }
+    return out;
+  }
   // 3. A real root of high multiplicity comes out as a ring of reals and
   //    pairs around it: find those rings first, as one cluster each.
-  const out: Complex[] = [];
   const ringsOut = realRings(c, reals, pairs, ev);
   for (const z of ringsOut.roots) out.push(z);
   reals.splice(0, reals.length, ...ringsOut.reals);

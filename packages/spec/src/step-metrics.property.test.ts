@@ -159,6 +159,29 @@ describe('computeStepMetrics properties', () => {
     expect(r.notes.join(' ')).toContain('the poles at -1 and -1.0005 are only 5.0e-4 of their size apart');
   });
 
+  it('a pair and a real pole nearly on top of each other, as coefficients, keep their places and give the zpk metrics', () => {
+    // Found by the zpk/polynomial property above: clustering put the pair
+    // -19.99986 +/- 0.1j on the real axis (its inclusion disk reaches it),
+    // which moved G(0) by 2.5e-5; the roots kept separate reproduce the
+    // coefficients, so parse-design uses those.
+    const design = {
+      poles: [
+        { re: -19.999864423410173, im: 0.1 },
+        { re: -19.999864423410173, im: -0.1 },
+        { re: -19.999898529069682, im: 0 },
+      ],
+      gain: 1,
+    };
+    const model = parseDesign(design);
+    const poly = parseDesign({ numerator: model.numerator, denominator: model.denominator });
+    expect(poly.poles.filter((p) => p.im !== 0)).toHaveLength(2);
+    const m0 = metrics(design);
+    const m1 = metrics({ numerator: model.numerator, denominator: model.denominator });
+    expect(close(m1.settlingTime, m0.settlingTime, 1e-9)).toBe(true);
+    expect(close(m1.riseTime, m0.riseTime, 1e-9)).toBe(true);
+    expect(close(m1.finalValue, m0.finalValue, 1e-9)).toBe(true);
+  });
+
   it('every stable model with a non-zero final value gets finite metrics', () => {
     fc.assert(
       fc.property(stableModel, (design) => {
