@@ -16,9 +16,13 @@ import { MAX_MODEL_ORDER } from './max-model-order.js';
 import { polyFromRoots } from './poly-from-roots.js';
 import { polyRoots } from './poly-roots.js';
 import { rootConsistency } from './root-consistency.js';
+import { formatNumber } from './format-complex.js';
 import { newRootList } from './root-list.js';
 import { sortRoots } from './sort-roots.js';
 import { magnitude } from './magnitude.js';
+
+/** Root sets that reproduce a polynomial worse than this (relative) are refused (see parsePolynomial). */
+const ROOTS_REFUSED = 1e-4;
 
 const CONJUGATE_TOLERANCE = 1e-9;
 const ZPK_FIELDS = new Set(['id', 'poles', 'zeros', 'gain']);
@@ -136,11 +140,24 @@ function parsePolynomial(input: Record<string, unknown>): Model {
   // Clustering a tight group of roots can leave a set that no longer
   // reproduces the polynomial (root-consistency.ts); the roots as found,
   // each polished on its own, may then do better.
-  if (!rootConsistency(model).ok) {
-    const separate: Model = { ...model, poles: polyRoots(denominator, true), zeros: polyRoots(numerator, true) };
-    if (rootConsistency(separate).ok) return separate;
+  const found = rootConsistency(model);
+  if (found.ok) return model;
+  const separate: Model = { ...model, poles: polyRoots(denominator, true), zeros: polyRoots(numerator, true) };
+  const apart = rootConsistency(separate);
+  if (apart.ok) return separate;
+  const best = apart.worst < found.worst ? apart : found;
+  // Roots this far off would misplace poles, dominance and plots, not only
+  // the metrics (computeStepMetrics refuses those on any mismatch): refuse
+  // the design, naming the polynomial.
+  if (best.worst > ROOTS_REFUSED) {
+    const which = best.field === 'denominator' ? 'poles' : 'zeros';
+    throw new SpecInputError(
+      'roots_ill_determined',
+      `The ${which} of these coefficients cannot be found accurately in double precision: the ${which} found reproduce the ${best.field} only to ${formatNumber(best.worst, 2)} of its value (at w = ${formatNumber(best.at)} rad/s). This happens with a root of high multiplicity or a tight cluster of roots; enter the model in zero-pole-gain form.`,
+      best.field,
+    );
   }
-  return model;
+  return best === apart ? separate : model;
 }
 
 function parseRootList(value: unknown, path: string): Complex[] {

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { computeStepMetrics } from './step-metrics.js';
 import { parseDesign } from './parse-design.js';
 import type { Model, StepMetrics } from './types.js';
+import { SpecInputError } from './spec-input-error.js';
 import { assertClose } from '../test/asserts.js';
 import { referenceMetrics } from '../test/ode-reference.js';
 import { systems } from '../test/reference-systems.js';
@@ -187,11 +188,18 @@ describe('n identical lags against the incomplete gamma function', () => {
     expect(m.overshootPct).toBe(0);
   });
 
-  it('1/(s+1)^30 as coefficients: the roots cannot be found in double precision, so no metrics, and the note says so', () => {
+  it('1/(s+1)^30 as coefficients: its roots cannot be found in double precision, so the design is refused, naming the denominator', () => {
     // (s+1)^30's computed roots spread over about 0.3 (eps^(1/30)); given as poles it is exact (above)
-    const { metrics, notes } = computeStepMetrics(parseDesign({ numerator: [1], denominator: binomial(30) }), 2);
-    expect(metrics).toBeNull();
-    expect(notes.join(' ')).toMatch(/do not reproduce the model closely enough for exact metrics .*enter the model in zero-pole-gain form/);
+    let error: unknown;
+    try {
+      parseDesign({ numerator: [1], denominator: binomial(30) });
+    } catch (e) {
+      error = e;
+    }
+    expect(error).toBeInstanceOf(SpecInputError);
+    expect((error as SpecInputError).code).toBe('roots_ill_determined');
+    expect((error as SpecInputError).path).toBe('denominator');
+    expect((error as SpecInputError).message).toMatch(/poles of these coefficients cannot be found accurately .*enter the model in zero-pole-gain form/);
   });
 });
 

@@ -67,7 +67,7 @@ export function computeStepMetrics(model: Model, settlingBandPct: number): { met
       return {
         metrics: null,
         notes: [
-          `the poles and zeros found for these coefficients do not reproduce the model closely enough for exact metrics (G(jw) from them is off by ${formatNumber(rc.worst, 2)} of its value at w = ${formatNumber(rc.at)} rad/s); a root of high multiplicity or a tight cluster of roots cannot be separated in double precision: enter the model in zero-pole-gain form`,
+          `the ${rc.field === 'denominator' ? 'poles' : 'zeros'} found for these coefficients do not reproduce the model closely enough for exact metrics (the ${rc.field} from them is off by ${formatNumber(rc.worst, 2)} of its value at w = ${formatNumber(rc.at)} rad/s); a root of high multiplicity or a tight cluster of roots cannot be separated in double precision: enter the model in zero-pole-gain form`,
         ],
       };
     }
