@@ -331,33 +331,9 @@ const RING_CAP = 0.2;
 
 function realRings(c: number[], reals: Cluster[], pairs: Cluster[], ev: Evaluation): { roots: Complex[]; reals: Cluster[]; pairs: Cluster[] } {
   const items = [...reals, ...pairs];
-  const k = items.length;
-  const parent = new Int32Array(k);
-  for (let i = 0; i < k; i++) parent[i] = i;
-  const find = (i: number): number => {
-    while (parent[i] !== i) i = parent[i] as number;
-    return i;
-  };
-  for (let i = 0; i < k; i++) {
-    const a = items[i] as Cluster;
-    for (let j = i + 1; j < k; j++) {
-      const b = items[j] as Cluster;
-      const d = Math.hypot(a.re - b.re, a.im - b.im);
-      if (d <= a.radius + b.radius && d <= RING_CAP * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im))) {
-        parent[find(i)] = find(j);
-      }
-    }
-  }
-  const groups = new Map<number, number[]>();
-  for (let i = 0; i < k; i++) {
-    const root = find(i);
-    const g = groups.get(root);
-    if (g) g.push(i);
-    else groups.set(root, [i]);
-  }
   const roots: Complex[] = [];
-  const taken = new Uint8Array(k);
-  for (const members of groups.values()) {
+  const taken = new Uint8Array(items.length);
+  for (const members of diskGroups(items, RING_CAP)) {
     // reals alone, or pairs alone: the usual clustering (a lone pair taken
     // for a double real root would leave the model)
     const pairCount = members.filter((i) => i >= reals.length).length;
@@ -405,7 +381,10 @@ function resolveCluster(c: number[], cl: Cluster, ev: Evaluation): Complex[] {
   return cl.members.map((w) => polish(c, w.re, w.im, ev));
 }
 
-function clusterByDisks(items: Cluster[]): Cluster[] {
+// Indices of the items whose inclusion disks overlap, directly or in a
+// chain, and which lie within `cap` of their size of each other: one list
+// per group, in the order of each group's first item.
+function diskGroups(items: Cluster[], cap: number): number[][] {
   const m = items.length;
   const parent = new Int32Array(m);
   for (let i = 0; i < m; i++) parent[i] = i;
@@ -421,33 +400,32 @@ function clusterByDisks(items: Cluster[]): Cluster[] {
     for (let j = i + 1; j < m; j++) {
       const b = items[j] as Cluster;
       const d = Math.hypot(a.re - b.re, a.im - b.im);
-      if (d <= a.radius + b.radius && d <= CLUSTER_CAP * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im))) {
+      if (d <= a.radius + b.radius && d <= cap * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im))) {
         parent[find(i)] = find(j);
       }
     }
   }
-  const groups = new Map<number, Cluster>();
+  const groups = new Map<number, number[]>();
   for (let i = 0; i < m; i++) {
-    const a = items[i] as Cluster;
     const root = find(i);
-    let g = groups.get(root);
-    if (!g) {
-      g = { re: 0, im: 0, radius: 0, members: [] };
-      groups.set(root, g);
-    }
-    g.members.push({ re: a.re, im: a.im });
+    const g = groups.get(root);
+    if (g) g.push(i);
+    else groups.set(root, [i]);
   }
-  const result: Cluster[] = [];
-  for (const g of groups.values()) {
+  return [...groups.values()];
+}
+
+function clusterByDisks(items: Cluster[]): Cluster[] {
+  return diskGroups(items, CLUSTER_CAP).map((group) => {
+    const members = group.map((i) => ({ re: (items[i] as Cluster).re, im: (items[i] as Cluster).im }));
     let re = 0;
     let im = 0;
-    for (const w of g.members) {
+    for (const w of members) {
       re += w.re;
       im += w.im;
     }
-    result.push({ re: re / g.members.length, im: im / g.members.length, radius: 0, members: g.members });
-  }
-  return result;
+    return { re: re / members.length, im: im / members.length, radius: 0, members };
+  });
 }
 
 // The k-th derivative's coefficients: an m-fold root of p is a simple root of

@@ -38,6 +38,27 @@ function metrics(design: unknown): StepMetrics {
 const close = (a: number | null, b: number | null, rel: number, abs = 1e-9) =>
   a === null || b === null ? a === b : Math.abs(a - b) <= rel * Math.max(Math.abs(b), abs);
 
+// -1.0005 and n real poles -1, -1.01, ..., unit DC gain
+function chain(n: number): { poles: Complex[]; gain: number } {
+  const poles: Complex[] = [{ re: -1.0005, im: 0 }, ...Array.from({ length: n }, (_, i) => ({ re: -1 - 0.01 * i, im: 0 }))];
+  let gain = 1;
+  for (const p of poles) gain *= -p.re;
+  return { poles, gain };
+}
+
+// Metrics with no ill-conditioning note, against odex on the polynomial realisation.
+function expectClusteredLikeOdex(design: unknown): void {
+  const model = parseDesign(design);
+  const r = computeStepMetrics(model, 2);
+  expect(r.notes.join(' ')).not.toMatch(/ill-conditioned/);
+  const m = r.metrics as StepMetrics;
+  expect(m).not.toBeNull();
+  const ref = referenceMetrics(model.numerator, model.denominator, m.finalValue, 2, 1.3 * m.settlingTime + 1, 40000);
+  expect(close(m.overshootPct, ref.overshootPct, 1e-5, 1e-3)).toBe(true);
+  expect(close(m.settlingTime, ref.settlingTime, 1e-4)).toBe(true);
+  expect(close(m.riseTime, ref.riseTime, 1e-4)).toBe(true);
+}
+
 describe('computeStepMetrics properties', () => {
   it('time scaling s -> s/a: times scale by 1/a, overshoot and undershoot unchanged', () => {
     fc.assert(
@@ -128,38 +149,18 @@ describe('computeStepMetrics properties', () => {
       zeros: [{ re: -0.3, im: 0 }],
       gain: 1,
     };
-    const model = parseDesign(design);
-    const r = computeStepMetrics(model, 2);
-    expect(r.notes.join(' ')).not.toMatch(/ill-conditioned/);
-    const m = r.metrics as StepMetrics;
-    expect(m).not.toBeNull();
-    const ref = referenceMetrics(model.numerator, model.denominator, m.finalValue, 2, 1.3 * m.settlingTime + 1, 40000);
-    expect(close(m.overshootPct, ref.overshootPct, 1e-5, 1e-3)).toBe(true);
-    expect(close(m.settlingTime, ref.settlingTime, 1e-4)).toBe(true);
-    expect(close(m.riseTime, ref.riseTime, 1e-4)).toBe(true);
+    expectClusteredLikeOdex(design);
   });
 
   it('a chain of thirteen real poles about 1e-2 apart, far too ill-conditioned apart, is summed as one cluster and matches odex', () => {
     // -1, -1.01, ..., -1.11 and -1.0005: kept apart the terms reach 2e19
     // times the final value; clustered at 1e-1 the chain is one cluster,
     // summed by expansion (partial-fractions.ts).
-    const poles: Complex[] = [{ re: -1.0005, im: 0 }, ...Array.from({ length: 12 }, (_, i) => ({ re: -1 - 0.01 * i, im: 0 }))];
-    let gain = 1;
-    for (const p of poles) gain *= -p.re;
-    const model = parseDesign({ poles, gain });
-    const r = computeStepMetrics(model, 2);
-    expect(r.notes.join(' ')).not.toMatch(/ill-conditioned/);
-    const m = r.metrics as StepMetrics;
-    const ref = referenceMetrics(model.numerator, model.denominator, m.finalValue, 2, 1.3 * m.settlingTime + 1, 40000);
-    expect(close(m.settlingTime, ref.settlingTime, 1e-4)).toBe(true);
-    expect(close(m.riseTime, ref.riseTime, 1e-4)).toBe(true);
+    expectClusteredLikeOdex(chain(12));
   });
 
   it('a chain of twenty-one real poles about 1e-2 apart is too wide even for the widest cluster: no metrics, and the note says why', () => {
-    const poles: Complex[] = [{ re: -1.0005, im: 0 }, ...Array.from({ length: 20 }, (_, i) => ({ re: -1 - 0.01 * i, im: 0 }))];
-    let gain = 1;
-    for (const p of poles) gain *= -p.re;
-    const r = computeStepMetrics(parseDesign({ poles, gain }), 2);
+    const r = computeStepMetrics(parseDesign(chain(20)), 2);
     expect(r.metrics).toBeNull();
     expect(r.notes.join(' ')).toMatch(/too ill-conditioned for exact metrics/);
     // and it names the nearly repeated poles, with digits enough to tell them apart
