@@ -153,7 +153,7 @@ function parsePolynomial(input: Record<string, unknown>): Model {
     const which = best.field === 'denominator' ? 'poles' : 'zeros';
     throw new SpecInputError(
       'roots_ill_determined',
-      `The ${which} of these coefficients cannot be found accurately in double precision: the ${which} found reproduce the ${best.field} only to ${formatNumber(best.worst, 2)} of its value (at w = ${formatNumber(best.at)} rad/s). This happens with a root of high multiplicity or a tight cluster of roots; enter the model in zero-pole-gain form.`,
+      `The ${which} of these coefficients cannot be found accurately in double precision: the ${which} found miss the ${best.field} by ${formatNumber(best.worst, 2)} of its value (at w = ${formatNumber(best.at)} rad/s). This happens with a root of high multiplicity or a tight cluster of roots; enter the model in zero-pole-gain form.`,
       best.field,
     );
   }
