@@ -1,2 +1,2 @@
 // Stored with every assessment so a result can be reproduced or compared.
-export const ENGINE_VERSION = '0.1.0';
+export const ENGINE_VERSION = '0.2.0';
