@@ -15,6 +15,7 @@ import { SpecInputError } from './spec-input-error.js';
 import { MAX_MODEL_ORDER } from './max-model-order.js';
 import { polyFromRoots } from './poly-from-roots.js';
 import { polyRoots } from './poly-roots.js';
+import { refineClusterFactors } from './refine-cluster-factors.js';
 import { rootConsistency } from './root-consistency.js';
 import { formatNumber } from './format-complex.js';
 import { newRootList } from './root-list.js';
@@ -138,10 +139,17 @@ function parsePolynomial(input: Record<string, unknown>): Model {
   }
   const model: Model = { form: 'polynomial', poles: polyRoots(denominator), zeros: polyRoots(numerator), gain: numerator[0] as number, numerator, denominator };
   // Clustering a tight group of roots can leave a set that no longer
-  // reproduces the polynomial (root-consistency.ts); the roots as found,
-  // each polished on its own, may then do better.
+  // reproduces the polynomial (root-consistency.ts); the clusters' refined
+  // factors, or the roots as found, each polished on its own, may do better.
   const found = rootConsistency(model);
   if (found.ok) return model;
+  // A near-multiple root taken for an exact one: refine the clusters' factors.
+  const factored: Model = {
+    ...model,
+    poles: sortRoots(refineClusterFactors(denominator, model.poles)),
+    zeros: sortRoots(refineClusterFactors(numerator, model.zeros)),
+  };
+  if (rootConsistency(factored).ok) return factored;
   const separate: Model = { ...model, poles: polyRoots(denominator, true), zeros: polyRoots(numerator, true) };
   const apart = rootConsistency(separate);
   if (apart.ok) return separate;
