@@ -28,6 +28,7 @@
 // Y is strictly proper, so there is no impulse at t = 0; the feedthrough
 // D = G(inf) is reported because y(0+) = D.
 import type { Complex, Model } from './types.js';
+import { dcGain } from './dc-gain.js';
 import { magnitude } from './magnitude.js';
 
 export const POLE_CLUSTER_TOLERANCE = 1e-5;
@@ -232,11 +233,8 @@ function expansion(q: Group, others: Complex[], zeros: Complex[], model: Model):
   let rMax = Math.abs(model.gain);
   for (const z of zeros) rMax *= magnitude(q.re - z.re, q.im - z.im) + r;
   for (const o of others) rMax /= magnitude(q.re - o.re, q.im - o.im) - r;
-  // |y_f| = |G(0)| from the same factors, for a relative bound
-  let yf = Math.abs(model.gain);
-  for (const z of zeros) yf *= magnitude(z.re, z.im);
-  for (const a of model.poles) yf /= magnitude(a.re, a.im);
-  const scale = (r ** (1 - m) * rMax) / yf;
+  // relative to |y_f| = |G(0)| (none with a pole at the origin: no bound holds)
+  const scale = (r ** (1 - m) * rMax) / Math.abs(dcGain(model) ?? 0);
   // h_k by multiplying the series 1 / (1 - e_i x) = sum e_i^j x^j
   const n = MAX_EXPANSION + 2;
   const hr = new Float64Array(n);

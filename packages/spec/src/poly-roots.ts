@@ -17,6 +17,7 @@
 // cluster is replaced by its mean (which is well conditioned) repeated m times.
 import type { Complex } from './types.js';
 import { sortRoots } from './sort-roots.js';
+import { unionGroups } from './union-groups.js';
 
 const EPS = 2.220446049250313e-16;
 const MAX_ITERATIONS = 600;
@@ -301,15 +302,13 @@ function symmetrize(c: number[], zr: Float64Array, zi: Float64Array, ev: Evaluat
   }
   // 3. A real root of high multiplicity comes out as a ring of reals and
   //    pairs around it: find those rings first, as one cluster each.
-  const ringsOut = realRings(c, reals, pairs, ev);
-  for (const z of ringsOut.roots) out.push(z);
-  reals.splice(0, reals.length, ...ringsOut.reals);
-  pairs.splice(0, pairs.length, ...ringsOut.pairs);
-  // 4. Cluster overlapping inclusion disks, 5. polish.
-  for (const cl of clusterByDisks(reals)) {
+  const rings = realRings(c, reals, pairs, ev);
+  out.push(...rings.roots);
+  // 4. Cluster the rest by overlapping inclusion disks, 5. polish.
+  for (const cl of clusterByDisks(rings.reals)) {
     for (const z of resolveCluster(c, cl, ev)) out.push({ re: z.re, im: 0 });
   }
-  for (const cl of clusterByDisks(pairs)) {
+  for (const cl of clusterByDisks(rings.pairs)) {
     for (const z of resolveCluster(c, cl, ev)) {
       const im = z.im > 0 ? z.im : cl.im; // polishing never moves a pair onto the axis
       out.push({ re: z.re, im }, { re: z.re, im: -im });
@@ -361,8 +360,9 @@ function realRings(c: number[], reals: Cluster[], pairs: Cluster[], ev: Evaluati
 // p^(m-2) do not all vanish there to rounding level (see resolveCluster).
 function multipleRoot(c: number[], m: number, re: number, im: number, ev: Evaluation): Complex | null {
   const z = polish(derivative(c, m - 1), re, im, ev);
-  for (let j = 0; j < m - 1; j++) {
-    evaluate(derivative(c, j), z.re, z.im, ev);
+  let d = c;
+  for (let j = 0; j < m - 1; j++, d = derivative(d, 1)) {
+    evaluate(d, z.re, z.im, ev);
     if (!(ev.backward <= MULTIPLE_ROOT_CHECK)) return null;
   }
   return z;
@@ -385,34 +385,12 @@ function resolveCluster(c: number[], cl: Cluster, ev: Evaluation): Complex[] {
 // chain, and which lie within `cap` of their size of each other: one list
 // per group, in the order of each group's first item.
 function diskGroups(items: Cluster[], cap: number): number[][] {
-  const m = items.length;
-  const parent = new Int32Array(m);
-  for (let i = 0; i < m; i++) parent[i] = i;
-  const find = (i: number): number => {
-    while (parent[i] !== i) {
-      parent[i] = parent[parent[i] as number] as number;
-      i = parent[i] as number;
-    }
-    return i;
-  };
-  for (let i = 0; i < m; i++) {
+  return unionGroups(items.length, (i, j) => {
     const a = items[i] as Cluster;
-    for (let j = i + 1; j < m; j++) {
-      const b = items[j] as Cluster;
-      const d = Math.hypot(a.re - b.re, a.im - b.im);
-      if (d <= a.radius + b.radius && d <= cap * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im))) {
-        parent[find(i)] = find(j);
-      }
-    }
-  }
-  const groups = new Map<number, number[]>();
-  for (let i = 0; i < m; i++) {
-    const root = find(i);
-    const g = groups.get(root);
-    if (g) g.push(i);
-    else groups.set(root, [i]);
-  }
-  return [...groups.values()];
+    const b = items[j] as Cluster;
+    const d = Math.hypot(a.re - b.re, a.im - b.im);
+    return d <= a.radius + b.radius && d <= cap * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im));
+  });
 }
 
 function clusterByDisks(items: Cluster[]): Cluster[] {

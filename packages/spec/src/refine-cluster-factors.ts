@@ -10,6 +10,7 @@
 import { polyFromRoots } from './poly-from-roots.js';
 import { polyRoots } from './poly-roots.js';
 import type { Complex } from './types.js';
+import { unionGroups } from './union-groups.js';
 
 const NEAR = 1e-3;
 const MAX_NEWTON = 40;
@@ -20,34 +21,22 @@ const ACCEPTED = 1e-8;
 
 export function refineClusterFactors(monic: readonly number[], roots: readonly Complex[]): Complex[] {
   const upper = roots.filter((z) => z.im >= 0);
-  const n = upper.length;
-  const parent = Array.from({ length: n }, (_, i) => i);
-  const find = (i: number): number => {
-    while (parent[i] !== i) i = parent[i] as number;
-    return i;
+  const near = (i: number, j: number): boolean => {
+    const a = upper[i] as Complex;
+    const b = upper[j] as Complex;
+    if ((a.im === 0) !== (b.im === 0)) return false;
+    return Math.hypot(a.re - b.re, a.im - b.im) <= NEAR * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im));
   };
-  for (let i = 0; i < n; i++) {
-    for (let j = i + 1; j < n; j++) {
-      const a = upper[i] as Complex;
-      const b = upper[j] as Complex;
-      if ((a.im === 0) !== (b.im === 0)) continue;
-      if (Math.hypot(a.re - b.re, a.im - b.im) <= NEAR * Math.max(Math.hypot(a.re, a.im), Math.hypot(b.re, b.im))) parent[find(i)] = find(j);
-    }
-  }
-  // each group: its roots with their conjugates, and how many it holds on or above the axis
-  const groups = new Map<number, { members: Complex[]; count: number }>();
-  for (let i = 0; i < n; i++) {
-    const root = find(i);
-    const z = upper[i] as Complex;
-    const g = groups.get(root) ?? { members: [], count: 0 };
-    g.members.push(z);
-    if (z.im > 0) g.members.push({ re: z.re, im: -z.im });
-    g.count++;
-    groups.set(root, g);
-  }
   const out: Complex[] = [];
-  for (const { members, count } of groups.values()) {
-    const refined = count > 1 ? factorRoots(monic, members) : null;
+  for (const group of unionGroups(upper.length, near)) {
+    // the group's roots with their conjugates
+    const members: Complex[] = [];
+    for (const i of group) {
+      const z = upper[i] as Complex;
+      members.push(z);
+      if (z.im > 0) members.push({ re: z.re, im: -z.im });
+    }
+    const refined = group.length > 1 ? factorRoots(monic, members) : null;
     out.push(...(refined ?? members));
   }
   return out;

@@ -9,7 +9,6 @@
 // its own but not together) would give another model's.
 import type { Model } from './types.js';
 
-const EPS = 2.220446049250313e-16;
 const TOLERANCE = 1e-8;
 /** Allowance over the coefficients' rounding level (Horner's error bound). */
 const ROUNDING_FACTOR = 100;
@@ -60,7 +59,7 @@ function compare(coeffs: readonly number[], roots: Model['poles'], lead: number,
     rr = t;
   }
   const rel = Math.hypot(rr - cr, ri - ci) / cm;
-  if (!(rel <= Math.max(TOLERANCE, (ROUNDING_FACTOR * EPS * bound) / cm))) out.ok = false;
+  if (!(rel <= Math.max(TOLERANCE, (ROUNDING_FACTOR * Number.EPSILON * bound) / cm))) out.ok = false;
   if (!(rel <= out.worst)) {
     out.worst = rel;
     out.at = w;

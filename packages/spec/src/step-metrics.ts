@@ -73,11 +73,11 @@ export function computeStepMetrics(model: Model, settlingBandPct: number): { met
     }
   }
   const notes: string[] = [];
-  const p = packResponse(conditionedModalForm(model, yf), 1 / yf);
+  const { form, spread } = conditionedModalForm(model, yf);
+  const p = packResponse(form, 1 / yf);
   // The modal sum cancels when residues dwarf the final value (high order,
   // clustered poles): its round-off is about eps * sum |C_k|. Past 1e-8 of
   // y_f the metrics would be noise, so say so instead of printing them.
-  const spread = transientBound(p, 0);
   // A residue that is not a finite number would make every metric garbage:
   // refuse rather than print numbers (no such model is known; this guards).
   if (!Number.isFinite(spread)) {
@@ -86,7 +86,7 @@ export function computeStepMetrics(model: Model, settlingBandPct: number): { met
       notes: ['the modal form of this model could not be computed in double precision (a residue is not a finite number); check the pole and zero placement or reduce the model'],
     };
   }
-  if (spread * 2.220446049250313e-16 > MAX_ROUNDING) {
+  if (spread * Number.EPSILON > MAX_ROUNDING) {
     return {
       metrics: null,
       notes: [

@@ -22,7 +22,7 @@ export interface StepResponse {
 
 export function stepResponse(model: Model): StepResponse {
   const finalValue = dcGain(model);
-  const modal = conditionedModalForm(model, finalValue);
+  const modal = conditionedModalForm(model, finalValue).form;
   const packed = packResponse(modal, 1);
   const out = new Float64Array(2);
   return {
