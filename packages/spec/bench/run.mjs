@@ -307,7 +307,7 @@ try {
   line(`c. odex, ${odexCount} designs timed, scaled to 10,000`, odexMs);
   const floorMs = Math.min(...floorWall);
   console.log(
-    `   the I/O floor alone is ${(mlMs / floorMs).toFixed(1)}x (a) and ${(odexMs / floorMs).toFixed(1)}x (c) faster than the grid: no batch that reads and writes these JSON lines can beat that ratio here`,
+    `   the I/O floor alone is ${(mlMs / floorMs).toFixed(1)}x (a), ${(loopMs / floorMs).toFixed(1)}x (b) and ${(odexMs / floorMs).toFixed(1)}x (c) faster than the grid: no batch that reads and writes these JSON lines can beat those ratios here`,
   );
   let odexWorst = 0;
   odexSampled.forEach((s, i) => (odexWorst = Math.max(odexWorst, Math.abs(s.overshootPct - sampled[i].overshootPct))));
