@@ -3,7 +3,7 @@
 //  2. wall time of `polecourt batch` on 10,000 sixth-order designs, process start included;
 //  3. the same designs simulated on a 2,000-point grid by general-purpose
 //     methods, metrics read off the samples, and the speed ratios (each method
-//     timed best of 3, as the engine and the batch are, on the first 2,000
+//     timed best of 3 in three rounds that interleave every figure, on the first 2,000
 //     designs, or 200 for odex, and scaled to 10,000):
 //     a. ml-matrix throughout: exact zero-order-hold discretisation of the
 //        controllable canonical realisation (matrix exponential of the augmented
@@ -228,31 +228,44 @@ try {
   }
   console.log(`1. one full assessment of a sixth-order design: median ${median(single).toFixed(1)} us (target < 100 us)`);
 
-  // best of 3: on a shared machine the fastest run is the least disturbed one
-  let assessments = [];
-  const engineRuns = [];
-  for (let run = 0; run < 3; run++) {
-    const t0 = performance.now();
-    assessments = all.map((d) => evaluate(d, requirements));
-    engineRuns.push(performance.now() - t0);
-  }
-  const engineMs = Math.min(...engineRuns);
-  console.log(`   10,000 assessments in process: ${engineMs.toFixed(0)} ms (best of 3; median ${median(engineRuns).toFixed(0)} ms)`);
-
-  // 2. the command-line batch, process start included
+  // Three rounds, each timing every figure once in turn (the engine in process,
+  // the batch, the I/O floor, then each grid method), and each figure the best
+  // of its three: on a shared machine the fastest run is the least disturbed
+  // one, and interleaving lets a slow moment fall on all of them alike rather
+  // than on whichever was timed then.
   const designsFile = join(dir, 'designs.jsonl');
   const reqFile = join(dir, 'requirements.json');
   writeFileSync(designsFile, all.map((d) => JSON.stringify(d)).join('\n') + '\n');
   writeFileSync(reqFile, JSON.stringify(requirements));
+  const req = parseRequirements(requirements);
+  const models = all.map((d) => parseDesign(d));
+  // The slow grid methods run on the first designs only, scaled to 10,000
+  // (every design has the same order and grid, so the cost per design does
+  // not depend on which).
+  const mlCount = 2_000;
+  const odexCount = 200;
+  const gridRun = (mode, count) => {
+    const s = performance.now();
+    const out = models.slice(0, count).map((m) => sampledMetrics(m, req.settlingBandPct, mode));
+    return [((performance.now() - s) * COUNT) / count, out];
+  };
+  let assessments = [];
+  let sampled = [];
+  let odexSampled = [];
+  const engineRuns = [];
   const wall = [];
   const floorWall = [];
+  const mlRuns = [];
+  const loopRuns = [];
+  const odexRuns = [];
   let lines = 0;
   let bytes = 0;
   let floorBytes = 0;
-  // The floor runs between the batch runs, so a slow moment of a shared
-  // machine falls on both alike.
   for (let run = 0; run < 3; run++) {
     let s = performance.now();
+    assessments = all.map((d) => evaluate(d, requirements));
+    engineRuns.push(performance.now() - s);
+    s = performance.now();
     const res = spawnSync(process.execPath, [cli, 'batch', '--designs', designsFile, '--requirements', reqFile], {
       maxBuffer: 1 << 30,
       encoding: 'utf8',
@@ -266,36 +279,25 @@ try {
     floorWall.push(performance.now() - s);
     if (floor.status !== 0) throw new Error(`io floor failed: ${floor.stderr}`);
     floorBytes = floor.stdout.length;
+    let ms;
+    [ms, sampled] = gridRun('ml-matrix', mlCount);
+    mlRuns.push(ms);
+    [ms] = gridRun('loop', mlCount);
+    loopRuns.push(ms);
+    [ms, odexSampled] = gridRun('odex', odexCount);
+    odexRuns.push(ms);
   }
+  const engineMs = Math.min(...engineRuns);
+  console.log(`   10,000 assessments in process: ${engineMs.toFixed(0)} ms (best of 3; median ${median(engineRuns).toFixed(0)} ms)`);
   console.log(
     `2. polecourt batch, 10,000 sixth-order designs: ${(Math.min(...wall) / 1000).toFixed(2)} s wall, best of 3 (median ${(median(wall) / 1000).toFixed(2)} s; target < 2 s; ${lines} lines out, ${(bytes / 1e6).toFixed(1)} MB)`,
   );
   console.log(
     `   I/O floor (bench/io-floor.mjs: the same lines read and ${(floorBytes / 1e6).toFixed(1)} MB of assessment-shaped JSON written, no engine work): ${(Math.min(...floorWall) / 1000).toFixed(2)} s wall, best of 3 (median ${(median(floorWall) / 1000).toFixed(2)} s)`,
   );
-
-  // 3. the general-purpose way: simulate on a 2,000-point grid, read metrics off samples
-  const req = parseRequirements(requirements);
-  const models = all.map((d) => parseDesign(d));
-  // Like the engine and the batch, each grid method is timed best of 3; the
-  // slow ones on the first designs only, scaled to 10,000 (every design has
-  // the same order and grid, so the cost per design does not depend on which).
-  const timed = (mode, count) => {
-    const list = models.slice(0, count);
-    let best = Infinity;
-    let out = [];
-    for (let run = 0; run < 3; run++) {
-      const s = performance.now();
-      out = list.map((m) => sampledMetrics(m, req.settlingBandPct, mode));
-      best = Math.min(best, performance.now() - s);
-    }
-    return [(best * COUNT) / count, out];
-  };
-  const mlCount = 2_000;
-  const odexCount = 200;
-  const [mlMs, sampled] = timed('ml-matrix', mlCount);
-  const [loopMs] = timed('loop', mlCount);
-  const [odexMs, odexSampled] = timed('odex', odexCount);
+  const mlMs = Math.min(...mlRuns);
+  const loopMs = Math.min(...loopRuns);
+  const odexMs = Math.min(...odexRuns);
   const batchMs = Math.min(...wall);
   const line = (label, ms) =>
     console.log(
@@ -305,6 +307,11 @@ try {
   line(`a. ml-matrix expm + Matrix.mmul per sample, ${mlCount.toLocaleString('en')} designs timed, scaled to 10,000`, mlMs);
   line(`b. ml-matrix expm + hand-written stepping loop, ${mlCount.toLocaleString('en')} designs timed, scaled to 10,000`, loopMs);
   line(`c. odex, ${odexCount} designs timed, scaled to 10,000`, odexMs);
+  const spread = (runs) => {
+    const r = runs.map((ms, i) => ms / wall[i]);
+    return `${Math.min(...r).toFixed(1)} to ${Math.max(...r).toFixed(1)}x`;
+  };
+  console.log(`   round by round, polecourt batch against a: ${spread(mlRuns)}, b: ${spread(loopRuns)}, c: ${spread(odexRuns)}`);
   const floorMs = Math.min(...floorWall);
   console.log(
     `   the I/O floor alone is ${(mlMs / floorMs).toFixed(1)}x (a), ${(loopMs / floorMs).toFixed(1)}x (b) and ${(odexMs / floorMs).toFixed(1)}x (c) faster than the grid: no batch that reads and writes these JSON lines can beat those ratios here`,
