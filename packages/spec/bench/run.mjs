@@ -245,9 +245,16 @@ try {
   const mlCount = 2_000;
   const odexCount = 200;
   const gridRun = (mode, count) => {
+    const list = models.slice(0, count);
     const s = performance.now();
-    const out = models.slice(0, count).map((m) => sampledMetrics(m, req.settlingBandPct, mode));
+    const out = list.map((m) => sampledMetrics(m, req.settlingBandPct, mode));
     return [((performance.now() - s) * COUNT) / count, out];
+  };
+  // a child process's wall time, process start included, and its output
+  const spawnTimed = (args) => {
+    const s = performance.now();
+    const res = spawnSync(process.execPath, args, { maxBuffer: 1 << 30, encoding: 'utf8' });
+    return { ms: performance.now() - s, res };
   };
   let assessments = [];
   let sampled = [];
@@ -262,23 +269,18 @@ try {
   let bytes = 0;
   let floorBytes = 0;
   for (let run = 0; run < 3; run++) {
-    let s = performance.now();
+    const s = performance.now();
     assessments = all.map((d) => evaluate(d, requirements));
     engineRuns.push(performance.now() - s);
-    s = performance.now();
-    const res = spawnSync(process.execPath, [cli, 'batch', '--designs', designsFile, '--requirements', reqFile], {
-      maxBuffer: 1 << 30,
-      encoding: 'utf8',
-    });
-    wall.push(performance.now() - s);
-    if (res.status === 2 || res.status === 3) throw new Error(`batch failed: ${res.stderr}`);
-    lines = res.stdout.split('\n').filter((l) => l.length > 0).length;
-    bytes = res.stdout.length;
-    s = performance.now();
-    const floor = spawnSync(process.execPath, [ioFloor, designsFile], { maxBuffer: 1 << 30, encoding: 'utf8' });
-    floorWall.push(performance.now() - s);
-    if (floor.status !== 0) throw new Error(`io floor failed: ${floor.stderr}`);
-    floorBytes = floor.stdout.length;
+    const batch = spawnTimed([cli, 'batch', '--designs', designsFile, '--requirements', reqFile]);
+    wall.push(batch.ms);
+    if (batch.res.status === 2 || batch.res.status === 3) throw new Error(`batch failed: ${batch.res.stderr}`);
+    lines = batch.res.stdout.split('\n').filter((l) => l.length > 0).length;
+    bytes = batch.res.stdout.length;
+    const floor = spawnTimed([ioFloor, designsFile, reqFile]);
+    floorWall.push(floor.ms);
+    if (floor.res.status !== 0) throw new Error(`io floor failed: ${floor.res.stderr}`);
+    floorBytes = floor.res.stdout.length;
     let ms;
     [ms, sampled] = gridRun('ml-matrix', mlCount);
     mlRuns.push(ms);
